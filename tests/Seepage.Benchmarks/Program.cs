@@ -1,3 +1,14 @@
-// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mesh|solve>`.
-Console.WriteLine("usage: Seepage.Benchmarks <mesh|solve>");
-return args.Length == 0 ? 1 : 0;
+// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mesh|solve> [options]`.
+// Each mode prints one fixed-format line per size (see MeshBenchmark and SolveBenchmark).
+using Seepage.Benchmarks;
+
+string mode = args.Length > 0 ? args[0] : "";
+string[] rest = args.Skip(1).ToArray();
+switch (mode)
+{
+    case "mesh": MeshBenchmark.Run(rest); return 0;
+    case "solve": SolveBenchmark.Run(rest); return 0;
+    default:
+        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve> [options]");
+        return 1;
+}
