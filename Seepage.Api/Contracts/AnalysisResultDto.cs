@@ -31,14 +31,14 @@ public sealed record UpliftDto(string Structure, IReadOnlyList<UpliftStationDto>
 
 public sealed record UpliftStationDto(double X, double Y, double Head, double Pressure);
 
-/// <summary>Exit gradient check. Gradients dimensionless; <c>at</c> = [x, y] in m; <c>depth</c> in m.</summary>
-public sealed record ExitDto(double MaxGradient, double[] At, double CriticalGradient, double Factor, double RequiredFactor,
-    bool Pass, double Depth, string Method, IReadOnlyList<ExitProfilePointDto> Profile);
+/// <summary>Exit gradient check (criticalGradient, factor, pass are null when the exit soil lacks Gs and e). Gradients dimensionless; <c>at</c> = [x, y] in m; <c>depth</c> in m.</summary>
+public sealed record ExitDto(double MaxGradient, double[] At, double? CriticalGradient, double? Factor, double RequiredFactor,
+    bool? Pass, double Depth, string Method, IReadOnlyList<ExitProfilePointDto> Profile);
 
 public sealed record ExitProfilePointDto(double X, double Gradient);
 
 /// <summary>Heave check at a cutoff (Terzaghi's prism, width D/2): depth D in m, average excess head in m.</summary>
-public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double Factor, double RequiredFactor, bool Pass);
+public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor, bool? Pass);
 
 /// <summary>Hand creep checks beside the FE results (lengths in m, ratios dimensionless).</summary>
 public sealed record CreepDto(CreepCheckDto Lane, CreepCheckDto Bligh);

@@ -10,12 +10,12 @@ namespace Seepage.Core.Meshing;
 /// </remarks>
 public sealed class Mesh
 {
-    public Mesh(double[] x, double[] y, int[] triangles, int[] zones, MeshQuality quality)
+    public Mesh(double[] x, double[] y, int[] triangles, int[] zones, MeshQuality quality, IReadOnlyList<string>? warnings = null)
     {
         if (x.Length != y.Length) throw new ArgumentException("x and y differ in length.");
         if (triangles.Length % 3 != 0) throw new ArgumentException("Triangle array length is not a multiple of 3.");
         if (zones.Length != triangles.Length / 3) throw new ArgumentException("One zone per triangle is needed.");
-        X = x; Y = y; Triangles = triangles; Zones = zones; Quality = quality;
+        X = x; Y = y; Triangles = triangles; Zones = zones; Quality = quality; Warnings = warnings ?? [];
     }
 
     /// <summary>Node x coordinates, metres.</summary>
@@ -28,6 +28,9 @@ public sealed class Mesh
     public int[] Zones { get; }
     /// <summary>Quality report of the mesher.</summary>
     public MeshQuality Quality { get; }
+
+    /// <summary>What the mesher merged or could not honour.</summary>
+    public IReadOnlyList<string> Warnings { get; }
 
     public int NodeCount => X.Length;
     public int TriangleCount => Zones.Length;

@@ -9,6 +9,8 @@ namespace Seepage.Core.Sections;
 public sealed record SectionDocument
 {
     public string? Title { get; init; }
+    /// <summary>Free text describing the scenario (optional).</summary>
+    public string? Description { get; init; }
     /// <summary>Unit of kx, ky: "m/s" (default), "cm/s", "m/day" or "ft/day".</summary>
     public string? ConductivityUnit { get; init; }
     /// <summary>Unit weight of water, kN/m³. Default 9.81.</summary>
