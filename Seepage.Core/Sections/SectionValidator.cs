@@ -131,11 +131,7 @@ public static class SectionValidator
                 problems.Add(new($"{at}/outline", "intersects itself (or has zero area); an outline must be a simple polygon."));
                 continue;
             }
-            if (PolygonMath.SignedArea(ring) < 0)
-            {
-                ring.Reverse();
-                warnings.Add($"Zone {i} outline was clockwise and has been reversed.");
-            }
+            if (PolygonMath.SignedArea(ring) < 0) ring.Reverse(); // either orientation is accepted; stored counter-clockwise
             zones.Add(new Zone(Math.Max(soil, 0), ring, z.Size));
         }
         return zones;
