@@ -137,6 +137,7 @@ async function run() {
     renderSoilLegend(byId('soil-legend'), doc);
     scene.showAnalysis(doc, result, field);
     renderResult();
+    document.body.dataset.runs = String(Number(document.body.dataset.runs || 0) + 1);
     setRunState('done');
   } catch (e) {
     setRunState('error');
