@@ -3,6 +3,7 @@
 import { byId, clear, html } from './dom.js';
 import { api, ApiError } from './api.js';
 import { SectionEditor } from './editor.js';
+import { formatJson } from './json-format.js';
 import { problemItems, syntaxItem } from './problems.js';
 import { Picture } from './picture.js';
 import { Scene } from './scene.js';
@@ -51,7 +52,7 @@ function describeExample(examples, name) {
 
 async function loadExample(name) {
   const doc = await api.example(name);
-  editor.setText(JSON.stringify(doc, null, 2));
+  editor.setText(formatJson(doc));
 }
 
 /** Editor changed: redraw the preview soon, check with the service a little later. */

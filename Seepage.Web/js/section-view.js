@@ -78,7 +78,10 @@ export function drawFeatures(features, labels, section, bounds) {
       features.append(svg('path', { class: 'wall-casing', d: pathData(line) }), svg('path', { class: 'wall', d: pathData(line) }));
     }
     const depth = Math.hypot(c.top[0] - c.tip[0], c.top[1] - c.tip[1]);
-    labels.append(text(c.tip[0], c.tip[1], `${c.name ?? 'cutoff'} (${fixed(depth, 1)} m)`, { dy: '1.3em' }));
+    // Labels of cutoffs left of the middle read leftwards, the others rightwards, so neighbours do not collide.
+    const left = c.tip[0] < (bounds.minX + bounds.maxX) / 2;
+    labels.append(text(c.tip[0], c.tip[1], `${c.name ?? 'cutoff'} (${fixed(depth, 1)} m)`,
+      { dy: '1.2em', dx: left ? '-0.3em' : '0.3em', 'text-anchor': left ? 'end' : 'start' }));
   }
 }
 

@@ -73,6 +73,11 @@ public sealed class DemoRunTests(BrowserFixture fixture)
         Assert.Matches(@"h = -?\d+\.\d{3} m", text.Replace('−', '-'));
         Assert.Contains("kPa", text);
         Assert.Contains("|i| =", text);
+        await page.CheckAsync("#show-mesh");
+        await page.ClickAsync("#zoom-in");
+        await page.ClickAsync("#zoom-in");
+        Assert.Equal(1, await page.Locator("#picture path.mesh").CountAsync());
+        await session.ScreenshotAsync("zoomed-mesh-hover");
         session.AssertNoConsoleErrors();
     }
 

@@ -40,6 +40,7 @@ public sealed class ExportTests(BrowserFixture fixture)
 
         var png = await page.RunAndWaitForDownloadAsync(() => page.ClickAsync("#export-png"));
         var bytes = await File.ReadAllBytesAsync((await png.PathAsync())!);
+        await File.WriteAllBytesAsync(Path.Combine(BrowserFixture.ScreenshotFolder, "exported-picture.png"), bytes);
         Assert.True(bytes.Length > 5_000, $"PNG is only {bytes.Length} bytes");
         Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47 }, bytes[..4]);
         session.AssertNoConsoleErrors();
