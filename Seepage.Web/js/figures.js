@@ -35,15 +35,16 @@ export function renderFigures(container, result, unit) {
   if (e) {
     container.append(html('h3', {}, 'Exit gradient (piping)'), table([
       row('largest exit gradient', `${fixed(e.maxGradient, 3)} at x = ${fixed(e.at?.[0], 2)} m, y = ${fixed(e.at?.[1], 2)} m`),
-      row('critical gradient i_c = (Gs − 1)/(1 + e)', fixed(e.criticalGradient, 3)),
-      row('factor of safety i_c / i', fixed(e.factor, 2), `≥ ${fixed(e.requiredFactor, 2)}`, e.pass),
+      row('critical gradient i_c = (Gs − 1)/(1 + e)', Number.isFinite(e.criticalGradient) ? fixed(e.criticalGradient, 3) : 'needs Gs and e of the exit soil'),
+      row('factor of safety i_c / i', e.factor === null || e.factor === undefined ? '—' : fixed(e.factor, 2), `≥ ${fixed(e.requiredFactor, 2)}`, e.pass),
       row('averaged over depth', `${fixed(e.depth, 2)} m (${e.method})`),
     ], true));
   }
 
   if ((result.heave ?? []).length) {
     container.append(html('h3', {}, 'Heave at cutoffs'), table(result.heave.map(h =>
-      row(`${h.cutoff} (D = ${fixed(h.depth, 2)} m, h_a = ${fixed(h.averageExcessHead, 3)} m)`, fixed(h.factor, 2), `≥ ${fixed(h.requiredFactor, 2)}`, h.pass)), true));
+      row(`${h.cutoff} (D = ${fixed(h.depth, 2)} m, h_a = ${fixed(h.averageExcessHead, 3)} m)`,
+        h.factor === null || h.factor === undefined ? 'needs Gs and e' : fixed(h.factor, 2), `≥ ${fixed(h.requiredFactor, 2)}`, h.pass)), true));
   }
 
   const c = result.creep;

@@ -34,12 +34,13 @@ async function start() {
     for (const ex of examples) pick.append(html('option', { value: ex.name }, ex.title || ex.name));
     if (examples.length === 0) { showAlert('The service offers no example sections.'); return; }
     const wanted = new URLSearchParams(location.search).get('example');
-    const first = examples.find(e => e.name === wanted) ?? examples[0];
+    const first = examples.find(e => e.name === wanted) ?? examples.find(e => e.isDefault) ?? examples[0];
     pick.value = first.name;
     describeExample(examples, first.name);
     pick.addEventListener('change', async () => { describeExample(examples, pick.value); await loadExample(pick.value); });
     await loadExample(first.name);
-    await run();
+    // ?run=0 opens the section without analysing it (for looking at a preview only).
+    if (new URLSearchParams(location.search).get('run') !== '0') await run();
   } catch (e) {
     setRunState('error');
     showAlert(`The page could not start: ${e.message}`);

@@ -35,13 +35,19 @@ export function upliftPlot(uplift) {
 /** Exit gradient along the exit surface with the allowable gradient i_c / F_required. */
 export function exitPlot(exit) {
   const pts = (exit.profile ?? []).map(p => [p.x, p.gradient]);
-  const allowable = exit.criticalGradient / exit.requiredFactor;
-  const plot = frame('Exit gradient along the exit surface', 'x (m)', 'upward gradient i (–)', [...pts, [pts[0]?.[0] ?? 0, allowable * 1.1]], { includeZero: true });
+  const hasLimit = Number.isFinite(exit.criticalGradient) && exit.requiredFactor > 0;
+  const allowable = hasLimit ? exit.criticalGradient / exit.requiredFactor : null;
+  const extent = hasLimit ? [...pts, [pts[0]?.[0] ?? 0, allowable * 1.1]] : pts;
+  const plot = frame('Exit gradient along the exit surface', 'x (m)', 'upward gradient i (–)', extent, { includeZero: true });
   const { g, sx, sy } = plot;
   g.append(svg('path', { class: 'series', d: line(pts, sx, sy) }));
-  g.append(svg('line', { class: 'limit', x1: M.left, x2: W - M.right, y1: sy(allowable), y2: sy(allowable) }));
-  g.append(svg('text', { class: 'limit-label', x: W - M.right - 4, y: sy(allowable) - 5, 'text-anchor': 'end' },
-    `allowable i = ${fixed(allowable, 3)} (i_c ${fixed(exit.criticalGradient, 3)} / F ${fixed(exit.requiredFactor, 2)})`));
+  if (hasLimit) {
+    g.append(svg('line', { class: 'limit', x1: M.left, x2: W - M.right, y1: sy(allowable), y2: sy(allowable) }));
+    g.append(svg('text', { class: 'limit-label', x: W - M.right - 4, y: sy(allowable) - 5, 'text-anchor': 'end' },
+      `allowable i = ${fixed(allowable, 3)} (i_c ${fixed(exit.criticalGradient, 3)} / F ${fixed(exit.requiredFactor, 2)})`));
+  } else {
+    g.append(svg('text', { class: 'limit-label', x: W - M.right - 4, y: M.top + 14, 'text-anchor': 'end' }, 'no allowable line: the exit soil has no Gs and e'));
+  }
   if (Array.isArray(exit.at)) {
     g.append(svg('circle', { class: 'marker', cx: sx(exit.at[0]), cy: sy(exit.maxGradient), r: 5 }));
     g.append(svg('text', { x: sx(exit.at[0]) + 8, y: sy(exit.maxGradient) + 12 }, `max ${fixed(exit.maxGradient, 3)}`));

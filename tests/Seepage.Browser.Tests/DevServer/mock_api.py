@@ -14,6 +14,13 @@ from http.server import SimpleHTTPRequestHandler, ThreadingHTTPServer
 ROOT = os.path.abspath(os.path.join(os.path.dirname(__file__), '..', '..', '..'))
 WEB = os.path.join(ROOT, 'Seepage.Web')
 EXAMPLE = json.load(open(os.path.join(os.path.dirname(__file__), 'fixture.section.json')))
+# Optional: a folder of *.section.json files to offer as examples (section preview only; analyses stay fixtures).
+EXTRA = os.environ.get('MOCK_EXAMPLES')
+EXAMPLES = {'fixture-weir': EXAMPLE}
+if EXTRA:
+    for f in sorted(os.listdir(EXTRA)):
+        if f.endswith('.section.json'):
+            EXAMPLES[f[:-len('.section.json')]] = json.load(open(os.path.join(EXTRA, f)))
 
 
 def fake_field(section):
@@ -110,9 +117,10 @@ class Handler(SimpleHTTPRequestHandler):
     def do_GET(self):
         p = self.path.split('?')[0]
         if p == '/api/v1/examples':
-            return self.send_json(200, [{'name': 'fixture-weir', 'title': 'Fixture weir (invented)', 'description': 'Fixture for layout work.'}])
+            return self.send_json(200, [{'name': n, 'title': d.get('title', n), 'description': d.get('description', 'Fixture for layout work.'),
+                                         'isDefault': n == 'fixture-weir'} for n, d in EXAMPLES.items()])
         if p.startswith('/api/v1/examples/'):
-            return self.send_json(200, EXAMPLE)
+            return self.send_json(200, EXAMPLES[p.rsplit('/', 1)[1]])
         if p.endswith('/field'):
             return self.send_json(200, fake_field(EXAMPLE))
         if p.startswith('/api/v1/analyses/'):
