@@ -12,7 +12,8 @@ const OVERLAYS = ['contourLabels', 'labels'];
 export class Picture {
   constructor(box) {
     this.box = box;
-    this.root = svg('svg', { xmlns: 'http://www.w3.org/2000/svg', role: 'img', 'aria-label': 'Section picture', id: 'picture' });
+    this.root = svg('svg', { xmlns: 'http://www.w3.org/2000/svg', role: 'img', id: 'picture',
+      'aria-label': 'Section picture. Keys: plus and minus zoom, 0 fits, arrows pan.' });
     this.root.append(svg('style', {}, PICTURE_STYLE));
     this.world = svg('svg', { class: 'world', preserveAspectRatio: 'xMidYMid meet', overflow: 'hidden' });
     this.hatch = concreteHatch();
@@ -163,6 +164,18 @@ export class Picture {
   }
 
   wireInput() {
+    // Keyboard: + and − zoom, 0 fits, arrow keys pan by a tenth of the view.
+    this.root.setAttribute('tabindex', '0');
+    this.root.addEventListener('keydown', e => {
+      const v = this.view;
+      const pan = { ArrowLeft: [-0.1, 0], ArrowRight: [0.1, 0], ArrowUp: [0, -0.1], ArrowDown: [0, 0.1] }[e.key];
+      if (e.key === '+' || e.key === '=') this.zoom(1 / 1.25);
+      else if (e.key === '-' || e.key === '_') this.zoom(1.25);
+      else if (e.key === '0') this.fit();
+      else if (pan) { this.view = { ...v, x: v.x + pan[0] * v.w, y: v.y + pan[1] * v.h }; this.applyView(); }
+      else return;
+      e.preventDefault();
+    });
     this.root.addEventListener('wheel', e => {
       e.preventDefault();
       const ctm = this.layers.fill.getScreenCTM();

@@ -52,4 +52,32 @@ public sealed class SectionCheckTests(BrowserFixture fixture)
         Assert.True(await page.Locator("#figures table").CountAsync() > 0, "the last figures disappeared");
         session.AssertNoConsoleErrors();
     }
+
+    [Fact]
+    public async Task OpenFile_SectionJson_ReplacesEditorTextAndPreview()
+    {
+        await using var session = await PageSession.OpenAsync(fixture);
+        await session.LoadDemoAsync();
+        var page = session.Page;
+        var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
+        section["title"] = "Opened from a file";
+        var oldId = section["soils"]![0]!["id"]!.GetValue<string>();
+        section["soils"]![0]!["id"] = "opened-soil";
+        foreach (var zone in section["zones"]!.AsArray())
+            if (zone!["soil"]!.GetValue<string>() == oldId) zone["soil"] = "opened-soil";
+        var path = Path.Combine(Path.GetTempPath(), $"opened-{Guid.NewGuid():N}.section.json");
+        await File.WriteAllTextAsync(path, section.ToJsonString());
+        try
+        {
+            await page.SetInputFilesAsync("#file-pick", path);
+            await page.Locator("#soil-legend td", new() { HasText = "opened-soil" }).WaitForAsync(new() { Timeout = 5_000 });
+            Assert.Contains("Opened from a file", await page.InputValueAsync("#editor"));
+            Assert.True(await page.Locator("#picture path.soil-fill[data-soil='opened-soil']").CountAsync() > 0, "preview does not show the opened soil");
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+        session.AssertNoConsoleErrors();
+    }
 }
