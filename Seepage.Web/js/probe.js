@@ -8,14 +8,17 @@ export class FieldProbe {
     const { nodes, triangles } = field;
     let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
     for (const [x, y] of nodes) { minX = Math.min(minX, x); maxX = Math.max(maxX, x); minY = Math.min(minY, y); maxY = Math.max(maxY, y); }
-    const n = Math.max(1, Math.ceil(Math.sqrt(triangles.length / 2)));
-    this.grid = { minX, minY, nx: n, ny: n, dx: (maxX - minX) / n || 1, dy: (maxY - minY) / n || 1 };
-    this.cells = Array.from({ length: n * n }, () => []);
+    // Square cells holding about two triangles each.
+    const w = Math.max(maxX - minX, 1e-9), h = Math.max(maxY - minY, 1e-9);
+    const cell = Math.sqrt((w * h) / Math.max(1, triangles.length / 2));
+    const nx = Math.max(1, Math.min(2000, Math.ceil(w / cell))), ny = Math.max(1, Math.min(2000, Math.ceil(h / cell)));
+    this.grid = { minX, minY, nx, ny, dx: w / nx, dy: h / ny };
+    this.cells = Array.from({ length: nx * ny }, () => []);
     triangles.forEach((t, k) => {
       const xs = t.map(i => nodes[i][0]), ys = t.map(i => nodes[i][1]);
       const [i0, j0] = this.cellOf(Math.min(...xs), Math.min(...ys));
       const [i1, j1] = this.cellOf(Math.max(...xs), Math.max(...ys));
-      for (let i = i0; i <= i1; i++) for (let j = j0; j <= j1; j++) this.cells[j * n + i].push(k);
+      for (let i = i0; i <= i1; i++) for (let j = j0; j <= j1; j++) this.cells[j * nx + i].push(k);
     });
   }
 

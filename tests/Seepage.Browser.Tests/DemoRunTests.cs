@@ -1,4 +1,6 @@
+using System.Globalization;
 using System.Text.Json;
+using System.Text.RegularExpressions;
 
 namespace Seepage.Browser.Tests;
 
@@ -69,10 +71,21 @@ public sealed class DemoRunTests(BrowserFixture fixture)
         var box = await page.Locator("#picture path.zone-outline").First.BoundingBoxAsync();
         Assert.NotNull(box);
         await page.Mouse.MoveAsync(box.X + box.Width * 0.5f, box.Y + box.Height * 0.5f);
-        var text = await page.Locator("#probe").InnerTextAsync();
-        Assert.Matches(@"h = -?\d+\.\d{3} m", text.Replace('−', '-'));
-        Assert.Contains("kPa", text);
+        var text = (await page.Locator("#probe").InnerTextAsync()).Replace('−', '-');
         Assert.Contains("|i| =", text);
+        double Read(string pattern) => double.Parse(Regex.Match(text, pattern).Groups[1].Value, CultureInfo.InvariantCulture);
+        double x = Read(@"x = (-?[\d.]+) m"), y = Read(@"y = (-?[\d.]+) m"), h = Read(@"h = (-?[\d.]+) m");
+        double u = Read(@"= (-?[\d.]+) kPa");
+
+        // The readout rounds x and y to 1 cm; the head there may differ by |grad h| x 1.4 cm from the shown one.
+        var id = await page.GetAttributeAsync("#figures", "data-analysis-id");
+        using var field = await GetJsonAsync($"api/v1/analyses/{id}/field");
+        var expected = FieldSample.HeadAt(field.RootElement, x, y);
+        Assert.NotNull(expected);
+        Assert.True(Math.Abs(expected.Value - h) < 0.02, $"readout h = {h} m at ({x}, {y}); field interpolates {expected} m");
+        using var section = JsonDocument.Parse(await page.InputValueAsync("#editor"));
+        var gammaW = section.RootElement.TryGetProperty("waterUnitWeight", out var g) ? g.GetDouble() : 9.81; // kN/m³, DESIGN default
+        Assert.True(Math.Abs(gammaW * (h - y) - u) < 0.3, $"readout u = {u} kPa, γw(h − y) = {gammaW * (h - y)} kPa");
         await page.CheckAsync("#show-mesh");
         await page.ClickAsync("#zoom-in");
         await page.ClickAsync("#zoom-in");
