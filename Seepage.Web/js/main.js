@@ -20,7 +20,7 @@ const picture = new Picture(byId('picture-box'));
 const scene = new Scene(picture, {
   probeEl: byId('probe'),
   flowNetEl: byId('flow-net'),
-  toggles: { fill: byId('show-fill'), equipotentials: byId('show-equipotentials'), flowlines: byId('show-flowlines'), mesh: byId('show-mesh') },
+  toggles: { fill: byId('show-fill'), equipotentials: byId('show-equipotentials'), flowlines: byId('show-flowlines'), mesh: byId('show-mesh'), arrows: byId('show-arrows') },
 });
 const editor = new SectionEditor({ onChange: text => onEdit(text) });
 

@@ -14,6 +14,7 @@ svg { font-family: "DejaVu Sans", system-ui, sans-serif; }
 .equipotential { fill: none; stroke: #161616; stroke-opacity: 0.8; stroke-width: 1; }
 .flow-line-casing { fill: none; stroke: #0d1c33; stroke-opacity: 0.55; stroke-width: 2.8; }
 .flow-line { fill: none; stroke: #ffffff; stroke-width: 1.3; }
+.velocity { fill: none; stroke: #0d1c33; stroke-width: 1.1; stroke-linecap: round; stroke-linejoin: round; }
 .structure { fill: url(#concrete); stroke: #37342f; stroke-width: 1.2; }
 .structure-base { fill: none; stroke: #37342f; stroke-width: 2.5; }
 .wall-casing { fill: none; stroke: #ffffff; stroke-width: 7; stroke-linecap: round; }

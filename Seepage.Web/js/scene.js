@@ -6,6 +6,7 @@ import { fixed, sig } from './format.js';
 import { sectionBounds, drawSoilFill, drawZoneOutlines, drawFeatures, drawSoilKey } from './section-view.js';
 import { headRange, drawHeadFill, drawMesh, drawEquipotentials, drawFlowLines, drawWalls, drawExitMarker, drawHeadLegend } from './field-view.js';
 import { FieldProbe } from './probe.js';
+import { drawVelocityArrows } from './arrows.js';
 
 export class Scene {
   constructor(picture, { probeEl, flowNetEl, toggles }) {
@@ -54,6 +55,7 @@ export class Scene {
     if (field && t.fill.checked) drawHeadFill(p.layers.fill, field, range);
     else drawSoilFill(p.layers.fill, section);
     if (field && t.mesh.checked) drawMesh(p.layers.mesh, field);
+    if (field && t.arrows.checked) drawVelocityArrows(p.layers.mesh, section, field, this.probe, bounds);
     drawZoneOutlines(p.layers.outline, section);
     if (field) {
       drawEquipotentials(p.layers.equipotentials, p.layers.contourLabels, field);

@@ -90,6 +90,8 @@ public sealed class DemoRunTests(BrowserFixture fixture)
         await page.ClickAsync("#zoom-in");
         await page.ClickAsync("#zoom-in");
         Assert.Equal(1, await page.Locator("#picture path.mesh").CountAsync());
+        await page.CheckAsync("#show-arrows");
+        Assert.Equal(1, await page.Locator("#picture path.velocity").CountAsync());
         await session.ScreenshotAsync("zoomed-mesh-hover");
         session.AssertNoConsoleErrors();
     }
