@@ -4,7 +4,8 @@ import { byId, clear, html } from './dom.js';
 import { api, ApiError } from './api.js';
 import { SectionEditor } from './editor.js';
 import { formatJson } from './json-format.js';
-import { problemItems, syntaxItem } from './problems.js';
+import { problemItems, syntaxItem, describePointer } from './problems.js';
+import { locatePointers, lineOfPointer, normalisePointer, valueAt } from './json-locate.js';
 import { Picture } from './picture.js';
 import { Scene } from './scene.js';
 import { renderSoilLegend } from './section-view.js';
@@ -94,8 +95,21 @@ async function check(text, doc) {
 
 function warningItems(warnings, text, doc) {
   if (!Array.isArray(warnings) || warnings.length === 0) return [];
-  const asProblem = { errors: Object.fromEntries(warnings.map((w, k) => typeof w === 'string' ? [`#${k}`, [w]] : [w.pointer ?? `#${k}`, [w.message ?? String(w)]])) };
-  return problemItems(asProblem, text, doc).map(i => ({ ...i, warning: true, where: i.pointer.startsWith('/') ? i.where : 'section', line: i.pointer.startsWith('/') ? i.line : null }));
+  const spots = locatePointers(text);
+  return warnings.map(w => {
+    const message = typeof w === 'string' ? w : (w.message ?? JSON.stringify(w));
+    const pointer = typeof w === 'object' && w?.pointer ? normalisePointer(w.pointer) : guessPointer(message, doc);
+    return { warning: true, pointer: pointer ?? '', where: pointer ? describePointer(pointer, doc) : 'section', messages: [message],
+      line: pointer ? lineOfPointer(text, spots, pointer) : null };
+  });
+}
+
+/** "Zone 1 outline …" names zones[1]: point the warning there when the section has that item. */
+function guessPointer(message, doc) {
+  const m = /\b(zone|soil|cutoff|structure|head|drain)s?\s+(\d+)\b/i.exec(message);
+  if (!m) return null;
+  const pointer = `/${m[1].toLowerCase()}s/${m[2]}`;
+  return valueAt(doc, pointer) === undefined ? null : pointer;
 }
 
 function showChecks(items, mood, summary) {

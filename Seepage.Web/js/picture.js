@@ -5,7 +5,7 @@ import { svg, clear } from './dom.js';
 import { PICTURE_STYLE } from './picture-style.js';
 import { niceTicks } from './ticks.js';
 
-const MARGIN = { left: 48, right: 96, top: 8, bottom: 34 };
+const MARGIN = { left: 48, right: 116, top: 8, bottom: 34 };
 const LAYERS = ['fill', 'mesh', 'outline', 'equipotentials', 'flowlines', 'features'];
 const OVERLAYS = ['contourLabels', 'labels'];
 

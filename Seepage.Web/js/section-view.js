@@ -125,7 +125,8 @@ export function drawSoilKey(legend, section) {
   arr(section.soils).forEach((s, i) => {
     const y = 10 + i * 18;
     legend.append(svg('rect', { x: 0, y, width: 12, height: 12, fill: soilColour(i), stroke: '#5c584f' }));
-    legend.append(svg('text', { x: 16, y: y + 10 }, String(s.id ?? `soil ${i + 1}`).slice(0, 12)));
+    const name = String(s.id ?? `soil ${i + 1}`);
+    legend.append(svg('text', { x: 16, y: y + 10 }, name.length > 13 ? name.slice(0, 12) + '…' : name));
   });
 }
 
