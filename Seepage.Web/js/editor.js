@@ -10,12 +10,13 @@ export class SectionEditor {
     this.area = byId('editor');
     this.gutter = byId('editor-gutter');
     this.frame = byId('editor-frame');
+    this.marks = byId('editor-marks');
     this.onChange = onChange;
     this.badLines = new Set();
     this.focusLineNo = null;
     this.lineCount = 0;
     this.area.addEventListener('input', () => { this.focusLineNo = null; this.renderGutter(); this.onChange(this.text); });
-    this.area.addEventListener('scroll', () => { this.gutter.scrollTop = this.area.scrollTop; });
+    this.area.addEventListener('scroll', () => this.syncScroll());
     this.area.addEventListener('keydown', e => this.indentOnTab(e));
     this.wireDrop();
   }
@@ -58,7 +59,17 @@ export class SectionEditor {
       this.gutter.append(html('div', { class: cls, 'data-line': k }, String(k)));
     }
     this.gutter.append(html('div', {}, ' '), html('div', {}, ' '));
+    // Bands behind the text on the same lines (the textarea is transparent).
+    clear(this.marks);
+    for (const k of new Set([...this.badLines, this.focusLineNo].filter(Boolean))) {
+      this.marks.append(html('div', { class: k === this.focusLineNo ? 'focus' : 'bad', style: `top:${(k - 1) * LINE_HEIGHT}px` }));
+    }
+    this.syncScroll();
+  }
+
+  syncScroll() {
     this.gutter.scrollTop = this.area.scrollTop;
+    this.marks.style.transform = `translateY(${-this.area.scrollTop}px)`;
   }
 
   indentOnTab(e) {

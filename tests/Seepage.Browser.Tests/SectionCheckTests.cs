@@ -31,6 +31,8 @@ public sealed class SectionCheckTests(BrowserFixture fixture)
             Assert.Contains(kxLine.ToString(), marked);
         }
 
+        await problem.First.Locator("button").ClickAsync();
+        Assert.True(await page.Locator("#editor-marks div.focus").CountAsync() == 1, "the problem line is not highlighted in the editor");
         await page.ClickAsync("#run");
         await page.Locator("body[data-run-state=error]").WaitForAsync(new() { Timeout = 30_000 });
         Assert.True(await page.Locator("#alert").IsVisibleAsync(), "no error message after a rejected run");
