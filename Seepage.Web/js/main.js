@@ -173,6 +173,7 @@ function renderResult() {
   caution.textContent = `Caution: ${result.caution || FALLBACK_CAUTION}`;
   caution.hidden = false;
   byId('figures').dataset.analysisId = result.id;
+  byId('plots-heading').textContent = 'Plots';
   renderFigures(byId('figures'), result, byId('flow-unit').value);
   const uplift = clear(byId('uplift-plots'));
   for (const u of result.uplift ?? []) if (u.stations?.length >= 2) uplift.append(upliftPlot(u));
@@ -185,6 +186,8 @@ function markStale() {
   const note = byId('figures').querySelector('.stale') ?? html('p', { class: 'note stale' });
   note.textContent = 'The section has been edited since this analysis; press “Analyse section” to update the figures.';
   byId('figures').prepend(note);
+  const plots = byId('plots-heading');
+  plots.textContent = 'Plots (of the previous analysis)';
 }
 
 function setRunState(s) {

@@ -40,12 +40,20 @@ export class Picture {
     this.bounds = { minX: -1, maxX: 1, minY: -1, maxY: 1 };
     this.view = null;
     this.listeners = [];
+    this.resizeListeners = [];
     this.wireInput();
-    new ResizeObserver(() => this.layout()).observe(box);
+    new ResizeObserver(() => {
+      const before = this.size?.width;
+      this.layout();
+      if (this.size.width !== before) for (const fn of this.resizeListeners) fn();
+    }).observe(box);
   }
 
   /** Registers fn(scale) called after every zoom, pan or resize; scale is pixels per metre. */
   onView(fn) { this.listeners.push(fn); }
+
+  /** Registers fn() called after the picture changed size (the caller redraws size-dependent parts). */
+  onResize(fn) { this.resizeListeners.push(fn); }
 
   /** Sets the world extent in metres and fits the view to it. */
   setBounds(bounds) {

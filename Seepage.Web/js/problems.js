@@ -21,7 +21,7 @@ export function problemItems(problem, text, doc) {
         pointer,
         where: describePointer(pointer, doc),
         messages: Array.isArray(messages) ? messages.map(String) : [String(messages)],
-        line: lineOfPointer(text, spots, pointer),
+        line: pointer === '' ? null : lineOfPointer(text, spots, pointer),
       });
     }
   }

@@ -20,6 +20,7 @@ export class Scene {
     this.boundsKey = '';
     for (const box of Object.values(toggles)) box.addEventListener('change', () => this.draw());
     picture.root.addEventListener('pointermove', e => this.readout(e));
+    picture.onResize(() => this.draw());
     picture.root.addEventListener('pointerleave', () => { this.probeEl.textContent = this.idleText(); });
   }
 
