@@ -82,4 +82,21 @@ public sealed class SectionCheckTests(BrowserFixture fixture)
         }
         session.AssertNoConsoleErrors();
     }
+
+    [Fact]
+    public async Task DropFile_SectionJson_ReplacesEditorText()
+    {
+        await using var session = await PageSession.OpenAsync(fixture);
+        await session.LoadDemoAsync();
+        var page = session.Page;
+        var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
+        section["title"] = "Dropped onto the editor";
+        await page.EvaluateAsync(@"text => {
+            const data = new DataTransfer();
+            data.items.add(new File([text], 'dropped.section.json', { type: 'application/json' }));
+            document.getElementById('editor-frame').dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
+        }", section.ToJsonString());
+        await page.WaitForFunctionAsync("() => document.getElementById('editor').value.includes('Dropped onto the editor')", null, new() { Timeout = 5_000 });
+        session.AssertNoConsoleErrors();
+    }
 }
