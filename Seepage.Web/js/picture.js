@@ -155,7 +155,7 @@ export class Picture {
     const s = this.scale;
     const g = this.axes;
     g.append(svg('rect', { class: 'frame', x: MARGIN.left, y: MARGIN.top, width: innerW, height: innerH }));
-    for (const x of niceTicks(vis.x, vis.x + vis.w, Math.max(3, Math.floor(innerW / 90)))) {
+    for (const x of niceTicks(vis.x, vis.x + vis.w, Math.max(4, Math.floor(innerW / 70)))) {
       const px = MARGIN.left + (x - vis.x) * s;
       g.append(svg('g', { class: 'tick' },
         svg('line', { x1: px, x2: px, y1: MARGIN.top + innerH, y2: MARGIN.top + innerH + 4 }),
