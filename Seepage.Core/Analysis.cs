@@ -34,6 +34,11 @@ public static class Analysis
         var creep = CreepCalculator.Compute(section, exitSoil);
         var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
         var gauges = GaugeCalculator.Compute(section, sampler);
+        var convergence = section.Mesh.ConvergenceCheck
+            ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
+        var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
+            ? TruncationCheck.Run(section, flow.PerMetre, section.Mesh.Order, s => MakeMesh(s, [], cancellation), options.Solver, warnings, cancellation)
+            : null;
 
         FlowNet? net = null;
         if (options.FlowNet)
@@ -47,7 +52,7 @@ public static class Analysis
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
         return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
-            clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges };
+            clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>

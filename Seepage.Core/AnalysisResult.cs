@@ -29,6 +29,12 @@ public sealed record AnalysisResult(
     /// <summary>Flow across each gauge of the section, m³/s per m.</summary>
     public IReadOnlyList<GaugeFlow> Gauges { get; init; } = [];
 
+    /// <summary>Convergence of the key figures over two uniform refinements (null unless mesh.convergenceCheck).</summary>
+    public ConvergenceResult? Convergence { get; init; }
+
+    /// <summary>The lateral-boundary truncation check (null when not run).</summary>
+    public TruncationResult? Truncation { get; init; }
+
     /// <summary>The caution every report carries.</summary>
     public const string Caution =
         "These results depend on the idealised section and the soil data given. They support, and never replace, " +

@@ -16,7 +16,9 @@ public sealed record AnalysisResultDto(
     string Caution,
     double Seconds,
     IndependentVariablesDto? IndependentVariables = null,
-    IReadOnlyList<GaugeDto>? Gauges = null);
+    IReadOnlyList<GaugeDto>? Gauges = null,
+    ConvergenceDto? Convergence = null,
+    TruncationDto? Truncation = null);
 
 /// <summary>Seepage discharge per metre of structure. <c>perMetre</c>, <c>inflow</c>, <c>outflow</c> in m³/s per m;
 /// <c>balance</c> = (inflow − outflow) / inflow, dimensionless;
@@ -68,3 +70,14 @@ public sealed record SolverStatsDto(string Method, int Levels, double OperatorCo
 /// <summary>Flow across a gauge polyline, m³/s per m (positive along the normal 90° counter-clockwise from the
 /// walking direction); length of the polyline inside the soil in m.</summary>
 public sealed record GaugeDto(string Name, double Flow, double Length);
+
+/// <summary>Convergence over two uniform refinements: triangles of the three meshes and, per figure, the three values
+/// (unit as named), the observed order, the Richardson estimate and the estimated relative error of the reported value.</summary>
+public sealed record ConvergenceDto(int[] Triangles, IReadOnlyList<ConvergenceFigureDto> Figures);
+
+public sealed record ConvergenceFigureDto(string Name, string Unit, double[] Values, double? ObservedOrder, double? Extrapolated, double EstimatedError);
+
+/// <summary>Truncation check: lateral boundaries (x, m) before and after pushing them out, the flows (m³/s per m)
+/// and the relative change.</summary>
+public sealed record TruncationDto(double LeftX, double RightX, double ExtendedLeftX, double ExtendedRightX, double Flow,
+    double ExtendedFlow, double Change);
