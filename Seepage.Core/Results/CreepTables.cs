@@ -4,7 +4,10 @@ namespace Seepage.Core.Results;
 /// Safe creep ratios by soil class, as the hand methods publish them. Values as recalled from the tables
 /// (from memory; check against the originals): Lane, "Security from under-seepage: masonry dams on earth
 /// foundations", Trans. ASCE 100, 1935 (weighted creep ratio C_w); Bligh, "Dams, barrages and weirs on porous
-/// foundations", Engineering News 64, 1910 (line-of-creep ratio C). Bligh gives no values for clays.
+/// foundations", Engineering News 64, 1910 (line-of-creep ratio C). Bligh gives no values for clays. Bligh's table is
+/// recalled as: light silt and sand 18, fine micaceous sand 15, coarse-grained sand 12, gravel and sand 9, boulders
+/// with gravel and sand 4–6; our classes map onto those rows (medium sand takes the coarse-sand value 12, the three
+/// gravels take 9, boulders take 5 from the 4–6 range) — that mapping is ours, not Bligh's.
 /// </summary>
 public static class CreepTables
 {

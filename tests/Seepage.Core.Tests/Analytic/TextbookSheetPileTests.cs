@@ -11,8 +11,10 @@ public class TextbookSheetPileTests
     // shape factor is K(m′)/(2K(m)) = 1/2 (m = m′ = sin 45°; Harr, "Groundwater and Seepage", 1962), so
     // q = k·H/2 = 4×10⁻⁶ m/s · 4.5 m / 2 = 9.0×10⁻⁶ m³/s per m = 0.7776 m³/day per m — the book's hand flow net
     // (Nf = 4, Nd = 8) gives the same. The layer extends 8T each side.
-    [Fact]
-    public void Analysis_DasSobhanSheetPile_FlowWithinOnePercentOfExact()
+    [Theory]
+    [InlineData(1)]
+    [InlineData(2)] // quadratic elements: flow from the P2 reactions
+    public void Analysis_DasSobhanSheetPile_FlowWithinOnePercentOfExact(int order)
     {
         double t = 6, w = 48;
         var doc = new SectionDocument
@@ -22,6 +24,7 @@ public class TextbookSheetPileTests
             Zones = [new() { Soil = "sand", Outline = Rect(-w, -t, w, 0) }],
             Cutoffs = [new() { Name = "sheet pile", Top = P(0, 0), Tip = P(0, -3) }],
             Heads = [new() { Name = "upstream", Along = [P(-w, 0), P(0, 0)], Total = 6 }, new() { Name = "downstream", Along = [P(0, 0), P(w, 0)], Total = 1.5 }],
+            Mesh = new() { Order = order },
             TruncationCheck = false,
         };
         var result = Seepage.Core.Analysis.Run(Valid(doc));
