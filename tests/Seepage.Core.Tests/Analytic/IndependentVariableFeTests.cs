@@ -7,7 +7,7 @@ public class IndependentVariableFeTests
 {
     // Khosla, Bose & Taylor, "Design of Weirs on Permeable Foundations", 1936 (closed forms from memory): floor
     // b = 10 m with a downstream pile d = 5 m, H = 6 m, on deep soil (the set-up of FloorWithCutoffTests).
-    // α = 2, λ = (1 + √5)/2 = 1.618: φE = arccos((λ − 2)/λ)/π = 54.1 %, φD = arccos((λ − 1)/λ)/π = 37.4 %,
+    // α = 2, λ = (1 + √5)/2 = 1.618: φE = arccos((λ − 2)/λ)/π = 57.6 %, φD = arccos((λ − 1)/λ)/π = 37.5 %,
     // G_E = H/(d·π·√λ) = 0.300. The reported method values must equal the closed forms and lie within one
     // percentage point (φ) and 5 % (G_E, exit depth 0.1 m) of the FE values reported beside them.
     private const double B = 10, D = 5, H = 6;
