@@ -71,7 +71,7 @@ public class MesherRobustnessTests
         Assert.Throws<MeshingException>(() => QualityMesher.Build(Polygon(outline, new Point2(5, 2)), new MeshOptions { Size = 0.1, MaxTriangles = 1000 }));
     }
 
-    [Fact(Skip = "Known defect: a 9.7° triangle next to the 10° apex; fix in progress")]
+    [Fact]
     public void Build_TenDegreeWedge_TerminatesAndKeepsBoundAwayFromApex()
     {
         // Wedge with a 10° apex at the origin, 10 m long sides.
