@@ -76,6 +76,17 @@ internal sealed partial class Triangulation
 
     public bool IsAlive(int t) => V[3 * t] >= 0;
 
+    /// <summary>Points every vertex at one of its live triangles again (after triangles were removed
+    /// without replacement or vertices were renamed).</summary>
+    public void RepairVertexTriangles()
+    {
+        for (int t = 0; t < TriangleSlots; t++)
+        {
+            if (!IsAlive(t)) continue;
+            VertexTri[V[3 * t]] = t; VertexTri[V[3 * t + 1]] = t; VertexTri[V[3 * t + 2]] = t;
+        }
+    }
+
     /// <summary>Makes h1 and h2 twins (h2 may be −1: boundary).</summary>
     public void Link(int h1, int h2)
     {
@@ -119,8 +130,10 @@ internal sealed partial class Triangulation
         int t0 = VertexTri[a];
         if (t0 < 0 || !IsAlive(t0)) return -1;
         int t = t0;
+        int guard = 0;
         while (true)
         {
+            if (++guard > 200000) throw new MeshingException($"Corrupt adjacency around vertex {a} (internal error).");
             int n = N[3 * t + (IndexOf(t, a) + 2) % 3];
             if (n < 0) break;
             t = n / 3;
@@ -146,9 +159,11 @@ internal sealed partial class Triangulation
         fan.Clear();
         int t0 = VertexTri[v];
         int t = t0;
+        int guard = 0;
         // Turn clockwise to a boundary edge (or all the way round).
         while (true)
         {
+            if (++guard > 100000) throw new MeshingException($"Corrupt adjacency around vertex {v} (internal error).");
             int i = IndexOf(t, v);
             int n = N[3 * t + (i + 2) % 3];         // edge v -> V[i+1]; the clockwise neighbour
             if (n < 0) break;
@@ -160,6 +175,7 @@ internal sealed partial class Triangulation
         t = start;
         while (true)
         {
+            if (++guard > 200000) throw new MeshingException($"Corrupt adjacency around vertex {v} (internal error).");
             fan.Add(t);
             int n = N[3 * t + (IndexOf(t, v) + 1) % 3]; // edge V[i+2] -> v; the counter-clockwise neighbour
             if (n < 0) break;
