@@ -7,7 +7,7 @@ namespace Seepage.Core.Solvers;
 /// second and fourth order elliptic problems", Computing 56, 1996, 179–196 — recalled from memory).
 /// Setup per level: symmetric strength |a_ij| ≥ θ_l √(a_ii a_jj) with θ_l = θ·2^{-l}; greedy aggregation;
 /// tentative prolongator from the constant near-null space; prolongator smoothing with ω = (4/3)/ρ(D⁻¹A),
-/// ρ from 12 Lanczos steps; Galerkin coarse matrix A_c = Pᵀ A P by two sparse products. Coarsening stops
+/// ρ from 8 Lanczos steps; Galerkin coarse matrix A_c = Pᵀ A P by two sparse products. Coarsening stops
 /// at <see cref="SolverOptions.CoarsestSize"/> rows, where a dense Cholesky factor solves exactly.
 /// Smoother: damped Jacobi with the same ω, one sweep before and one after the coarse correction, so the
 /// cycle is a symmetric positive definite operator and fits conjugate gradients.</summary>
@@ -19,9 +19,10 @@ public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
     private readonly DenseCholesky? _coarseFactor;
 
     public AlgebraicMultigridPreconditioner(CsrMatrix a, SolverOptions? options = null, CancellationToken cancellation = default)
-        : this(a, options ?? new SolverOptions(), cancellation, Stopwatch.StartNew()) { }
+        : this(a, options ?? new SolverOptions(), cancellation, Stopwatch.StartNew(), null) { }
 
-    internal AlgebraicMultigridPreconditioner(CsrMatrix a, SolverOptions options, CancellationToken cancellation, Stopwatch clock)
+    internal AlgebraicMultigridPreconditioner(CsrMatrix a, SolverOptions options, CancellationToken cancellation, Stopwatch clock,
+        double[]? fineDiagonal)
     {
         var start = clock.Elapsed;
         var levels = new List<AmgLevel>();
@@ -35,8 +36,8 @@ public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
                 throw new SolverNotConvergedException(Name, 0, double.NaN, options.RelativeTolerance,
                     $"time budget exceeded during multigrid setup (level {levels.Count})");
             totalNonZeros += matrix.NonZeros;
-            var diagonal = matrix.Diagonal();
-            double rho = SpectralRadius.OfJacobi(matrix, diagonal);
+            var diagonal = levels.Count == 0 && fineDiagonal is not null ? fineDiagonal : matrix.Diagonal();
+            double rho = SpectralRadius.OfJacobi(matrix, diagonal, 8);
             double omega = 4.0 / 3.0 / rho;
             var weight = new double[matrix.Size];
             for (int i = 0; i < weight.Length; i++) weight[i] = diagonal[i] > 0 ? omega / diagonal[i] : 0;
