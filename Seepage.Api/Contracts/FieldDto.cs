@@ -1,0 +1,27 @@
+namespace Seepage.Api.Contracts;
+
+/// <summary>
+/// Field data for drawing an analysis (served apart from the summary): node coordinates (m), triangles
+/// (node indices, counter-clockwise), zone index per triangle, total head per node (m), equipotentials at
+/// equal head drops and flow lines bounding equal-flow channels (polylines of [x, y] in m).
+/// </summary>
+public sealed record FieldDto(
+    string Id,
+    double[][] Nodes,
+    int[][] Triangles,
+    int[] Zones,
+    double[] Heads,
+    IReadOnlyList<EquipotentialDto> Equipotentials,
+    IReadOnlyList<FlowLineDto> FlowLines,
+    FlowNetDto FlowNet,
+    IReadOnlyList<double[][]> Walls);
+
+/// <summary>One equipotential: its total head in m and the polylines where the field takes it.</summary>
+public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Paths);
+
+/// <summary>One flow line, traced from the inflow boundary; <c>fraction</c> is the share of the flow passing
+/// between it and the first flow line.</summary>
+public sealed record FlowLineDto(double Fraction, double[][] Points);
+
+/// <summary>Flow-net counts: Nf flow channels, Nd head drops, shape factor Nf/Nd, so q ≈ k·H·Nf/Nd.</summary>
+public sealed record FlowNetDto(int FlowChannels, int HeadDrops, double ShapeFactor, double HeadDifference);

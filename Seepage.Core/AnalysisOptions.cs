@@ -1,0 +1,16 @@
+using Seepage.Core.Solvers;
+
+namespace Seepage.Core;
+
+/// <summary>Options of one analysis run.</summary>
+public sealed record AnalysisOptions
+{
+    /// <summary>Linear solver stopping rule and limits.</summary>
+    public SolverOptions Solver { get; init; } = new();
+
+    /// <summary>Whether to compute the flow net (equipotentials and the stream function). Default true.</summary>
+    public bool FlowNet { get; init; } = true;
+
+    /// <summary>Number of equal head drops of the flow net. Default 12.</summary>
+    public int HeadDrops { get; init; } = Results.FlowNetBuilder.DefaultHeadDrops;
+}

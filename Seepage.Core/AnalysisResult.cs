@@ -1,0 +1,29 @@
+using Seepage.Core.Fem;
+using Seepage.Core.Meshing;
+using Seepage.Core.Results;
+using Seepage.Core.Sections;
+using Seepage.Core.Solvers;
+
+namespace Seepage.Core;
+
+/// <summary>Everything one analysis produced: the engineering figures, the field for drawing, and the reports of
+/// each stage. Units as in the component records (m, m/s, m³/s per m, kPa, kN/m).</summary>
+public sealed record AnalysisResult(
+    SectionModel Section,
+    Mesh Mesh,
+    HeadField Field,
+    FlowSummary Flow,
+    IReadOnlyList<UpliftResult> Uplift,
+    ExitResult? Exit,
+    IReadOnlyList<HeaveResult> Heave,
+    CreepResult? Creep,
+    SolveReport Solver,
+    FlowNet? FlowNet,
+    IReadOnlyList<string> Warnings,
+    double Seconds)
+{
+    /// <summary>The caution every report carries.</summary>
+    public const string Caution =
+        "These results depend on the idealised section and the soil data given. They support, and never replace, " +
+        "review by a licensed geotechnical engineer; local codes govern the required factors of safety.";
+}

@@ -1,0 +1,66 @@
+using Seepage.Core.Geometry;
+using Seepage.Core.Sections;
+
+namespace Seepage.Core.Results;
+
+/// <summary>
+/// Heave at each cutoff by Terzaghi's prism (Terzaghi, "Theoretical Soil Mechanics", 1943): a soil prism beside
+/// the wall on its downstream side, depth D from the surface to the tip and width D/2. Its submerged weight
+/// γ′·D·D/2 resists the uplift γw·h_a·D/2, h_a the average excess head at the prism base over the head at its top,
+/// so the factor is γ′·D / (γw·h_a). The downstream side is the face with the lower heads.
+/// </summary>
+public static class HeaveCalculator
+{
+    private const int Samples = 40;
+
+    public static List<HeaveResult> Compute(SectionModel section, FieldSampler sampler, List<string> warnings)
+    {
+        var results = new List<HeaveResult>();
+        double eps = 1e-5 * section.Extent;
+        foreach (var c in section.Cutoffs)
+        {
+            double depth = c.Top.Y - c.Tip.Y;
+            if (depth <= 0) { warnings.Add($"Heave: cutoff '{c.Name}' does not point downwards; no prism check."); continue; }
+            var mid = 0.5 * (c.Top + c.Tip);
+            double? left = sampler.Head(new Point2(mid.X - eps, mid.Y)), right = sampler.Head(new Point2(mid.X + eps, mid.Y));
+            if (left is null || right is null) continue;
+            int side = right < left ? 1 : -1;
+            double width = depth / 2;
+            double baseHead = Average(x => sampler.Head(new Point2(x, c.Tip.Y)), c.Tip.X, side, width, eps);
+            double topHead = Average(x => SurfaceHead(sampler, x, c.Top.Y, eps), c.Top.X, side, width, eps);
+            if (double.IsNaN(baseHead) || double.IsNaN(topHead))
+            {
+                warnings.Add($"Heave: the prism beside cutoff '{c.Name}' leaves the soil; no prism check.");
+                continue;
+            }
+            double excess = baseHead - topHead;
+            int t = sampler.Locate(new Point2(c.Tip.X + side * width / 2, 0.5 * (c.Top.Y + c.Tip.Y)));
+            var soil = section.Soils[section.Zones[sampler.Field.Mesh.Zones[Math.Max(t, 0)]].Soil];
+            double? ic = ExitGradientCalculator.CriticalGradient(soil, section.WaterUnitWeight);
+            double? factor = ic is { } i && excess > 0 ? i * depth / excess : null; // γ′/γw = i_c
+            if (ic is null) warnings.Add($"Heave: soil '{soil.Id}' beside cutoff '{c.Name}' lacks specificGravity and voidRatio (or saturatedUnitWeight); no factor.");
+            if (section.Structures.Any(s => PolygonMath.DistanceToPolyline(c.Top + new Point2(side * width / 2, 0), s.Base) < 1e-6 * section.Extent))
+                warnings.Add($"Heave: the prism beside cutoff '{c.Name}' lies under a structure; the structure's weight is not counted.");
+            bool? pass = factor is { } f ? f >= section.HeaveRequiredFactor : null;
+            double from = c.Tip.X, to = c.Tip.X + side * width;
+            results.Add(new HeaveResult(c.Name, depth, excess, factor, section.HeaveRequiredFactor, pass, Math.Min(from, to), Math.Max(from, to)));
+        }
+        return results;
+    }
+
+    // Head just below the prism top, so the point is inside the soil.
+    private static double? SurfaceHead(FieldSampler sampler, double x, double y, double eps) => sampler.Head(new Point2(x, y - eps));
+
+    // Mean over the prism width by the midpoint rule, starting just off the wall face.
+    private static double Average(Func<double, double?> head, double x0, int side, double width, double eps)
+    {
+        double sum = 0;
+        for (int k = 0; k < Samples; k++)
+        {
+            double x = x0 + side * (eps + (k + 0.5) / Samples * (width - eps));
+            if (head(x) is not { } h) return double.NaN;
+            sum += h;
+        }
+        return sum / Samples;
+    }
+}

@@ -1,0 +1,109 @@
+using System.Text.Json.Serialization;
+
+namespace Seepage.Core.Sections;
+
+/// <summary>
+/// The section document exactly as posted (public contract; names fixed by the design). Every member is
+/// optional here so that the validator, not the parser, reports what is missing. Points are [x, y] in metres.
+/// </summary>
+public sealed record SectionDocument
+{
+    public string? Title { get; init; }
+    /// <summary>Unit of kx, ky: "m/s" (default), "cm/s", "m/day" or "ft/day".</summary>
+    public string? ConductivityUnit { get; init; }
+    /// <summary>Unit weight of water, kN/m³. Default 9.81.</summary>
+    public double? WaterUnitWeight { get; init; }
+    public List<SoilDocument>? Soils { get; init; }
+    public List<ZoneDocument>? Zones { get; init; }
+    public List<StructureDocument>? Structures { get; init; }
+    public List<CutoffDocument>? Cutoffs { get; init; }
+    public List<HeadDocument>? Heads { get; init; }
+    public List<DrainDocument>? Drains { get; init; }
+    public ExitCheckDocument? ExitCheck { get; init; }
+    public HeaveCheckDocument? HeaveCheck { get; init; }
+    public MeshDocument? Mesh { get; init; }
+    /// <summary>Length of the structure along its axis, metres (optional; gives total flow).</summary>
+    public double? StructureLength { get; init; }
+
+    [JsonExtensionData]
+    public Dictionary<string, object>? Extra { get; init; }
+}
+
+/// <summary>A soil: conductivities kx, ky in <see cref="SectionDocument.ConductivityUnit"/> (ky defaults to kx),
+/// bedding angle in degrees counter-clockwise from +x, specific gravity of solids and void ratio for the
+/// critical gradient, saturated unit weight kN/m³ (optional), creep class for the hand creep checks.</summary>
+public sealed record SoilDocument
+{
+    public string? Id { get; init; }
+    public double? Kx { get; init; }
+    public double? Ky { get; init; }
+    public double? BeddingAngle { get; init; }
+    public double? SpecificGravity { get; init; }
+    public double? VoidRatio { get; init; }
+    public double? SaturatedUnitWeight { get; init; }
+    public string? CreepClass { get; init; }
+}
+
+/// <summary>A zone: a soil id and a closed outline (list of [x, y], m; closing point optional);
+/// optional size is the target edge length in m inside it.</summary>
+public sealed record ZoneDocument
+{
+    public string? Soil { get; init; }
+    public List<double[]>? Outline { get; init; }
+    public double? Size { get; init; }
+}
+
+/// <summary>Where an impervious structure meets soil: a polyline on the domain boundary.</summary>
+public sealed record StructureDocument
+{
+    public string? Name { get; init; }
+    public List<double[]>? Base { get; init; }
+}
+
+/// <summary>A cutoff wall from top to tip (m). Zero thickness and impervious unless thickness and kx are given.</summary>
+public sealed record CutoffDocument
+{
+    public string? Name { get; init; }
+    public double[]? Top { get; init; }
+    public double[]? Tip { get; init; }
+    public double? Thickness { get; init; }
+    public double? Kx { get; init; }
+}
+
+/// <summary>A fixed total head (m) along a polyline of the domain boundary.</summary>
+public sealed record HeadDocument
+{
+    public string? Name { get; init; }
+    public List<double[]>? Along { get; init; }
+    public double? Total { get; init; }
+}
+
+/// <summary>A drain: atmospheric pressure (h = y) along a polyline of the domain boundary.</summary>
+public sealed record DrainDocument
+{
+    public string? Name { get; init; }
+    public List<double[]>? Along { get; init; }
+}
+
+/// <summary>Exit gradient check: exit surface polyline (defaults to the tailwater boundary), averaging depth in m
+/// (default 0.5 m), required factor of safety against piping (default 3.0).</summary>
+public sealed record ExitCheckDocument
+{
+    public List<double[]>? Along { get; init; }
+    public double? Depth { get; init; }
+    public double? RequiredFactor { get; init; }
+}
+
+/// <summary>Heave check at cutoffs: required factor (default 1.5).</summary>
+public sealed record HeaveCheckDocument
+{
+    public double? RequiredFactor { get; init; }
+}
+
+/// <summary>Mesh request: target edge length in m (default: the domain's larger extent / 60, at most 2 m),
+/// minimum angle in degrees (default 28).</summary>
+public sealed record MeshDocument
+{
+    public double? Size { get; init; }
+    public double? MinAngle { get; init; }
+}

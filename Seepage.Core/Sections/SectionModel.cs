@@ -1,0 +1,66 @@
+using Seepage.Core.Geometry;
+
+namespace Seepage.Core.Sections;
+
+/// <summary>
+/// A validated section: conductivities in m/s, lengths and elevations in metres, heads in metres of total head,
+/// unit weight of water in kN/m³. Zone outlines are counter-clockwise without a closing point. Built only by
+/// <see cref="SectionValidator"/>.
+/// </summary>
+public sealed record SectionModel(
+    string Title,
+    double WaterUnitWeight,
+    IReadOnlyList<Soil> Soils,
+    IReadOnlyList<Zone> Zones,
+    IReadOnlyList<Structure> Structures,
+    IReadOnlyList<Cutoff> Cutoffs,
+    IReadOnlyList<HeadBoundary> Heads,
+    IReadOnlyList<DrainBoundary> Drains,
+    ExitCheck ExitCheck,
+    double HeaveRequiredFactor,
+    MeshSettings Mesh,
+    double? StructureLength,
+    IReadOnlyList<string> Warnings)
+{
+    /// <summary>Largest extent of the domain, metres.</summary>
+    public double Extent
+    {
+        get
+        {
+            var pts = Zones.SelectMany(z => z.Outline).ToList();
+            return Math.Max(pts.Max(p => p.X) - pts.Min(p => p.X), pts.Max(p => p.Y) - pts.Min(p => p.Y));
+        }
+    }
+
+    /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
+    public double Tolerance => 1e-7 * Extent;
+}
+
+/// <summary>A soil. Kx, Ky in m/s along and across the bedding; BeddingAngle in degrees counter-clockwise from +x.</summary>
+public sealed record Soil(string Id, double Kx, double Ky, double BeddingAngle, double? SpecificGravity, double? VoidRatio,
+    double? SaturatedUnitWeight, string? CreepClass);
+
+/// <summary>A zone of one soil (index into <see cref="SectionModel.Soils"/>); Size is an optional edge length in m.</summary>
+public sealed record Zone(int Soil, IReadOnlyList<Point2> Outline, double? Size);
+
+/// <summary>The base of an impervious structure, a polyline on the domain boundary (m).</summary>
+public sealed record Structure(string Name, IReadOnlyList<Point2> Base);
+
+/// <summary>A zero-thickness impervious cutoff wall from Top to Tip (m).</summary>
+public sealed record Cutoff(string Name, Point2 Top, Point2 Tip)
+{
+    /// <summary>Length of the wall, m.</summary>
+    public double Length => Top.DistanceTo(Tip);
+}
+
+/// <summary>A fixed total head (m) along a boundary polyline.</summary>
+public sealed record HeadBoundary(string Name, IReadOnlyList<Point2> Along, double Total);
+
+/// <summary>A drain along a boundary polyline: pore pressure zero, so total head equals elevation.</summary>
+public sealed record DrainBoundary(string Name, IReadOnlyList<Point2> Along);
+
+/// <summary>The exit check: exit surface (polyline, m), averaging depth (m), required factor against piping.</summary>
+public sealed record ExitCheck(IReadOnlyList<Point2> Along, double Depth, double RequiredFactor, bool AlongGiven);
+
+/// <summary>Mesh request: target edge length (m) and smallest angle (degrees).</summary>
+public sealed record MeshSettings(double Size, double MinAngle);

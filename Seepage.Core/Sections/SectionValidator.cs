@@ -1,0 +1,226 @@
+using Seepage.Core.Geometry;
+
+namespace Seepage.Core.Sections;
+
+/// <summary>
+/// Checks a section document against the contract and the physics, and builds the <see cref="SectionModel"/>.
+/// Every problem found is reported (with its JSON pointer), not just the first.
+/// </summary>
+public static class SectionValidator
+{
+    /// <summary>Largest number of input vertices accepted (all outlines and polylines together).</summary>
+    public const int MaxVertices = 20_000;
+
+    /// <summary>Largest number of triangles a requested mesh size may lead to (estimated from area / size²).</summary>
+    public const int MaxEstimatedTriangles = 4_000_000;
+
+    public static ValidationOutcome Validate(SectionDocument doc)
+    {
+        var problems = new List<SectionProblem>();
+        var warnings = new List<string>();
+        var reader = new PointReader(problems);
+
+        if (doc.Extra is { Count: > 0 })
+            foreach (var key in doc.Extra.Keys)
+                warnings.Add($"Unknown member '{key}' at the top level was ignored.");
+
+        double unitFactor = 1;
+        string unit = doc.ConductivityUnit ?? "m/s";
+        if (!ConductivityUnits.ToMetresPerSecond.TryGetValue(unit, out unitFactor))
+            problems.Add(new("/conductivityUnit", $"'{unit}' is not a known unit; use one of {string.Join(", ", ConductivityUnits.ToMetresPerSecond.Keys)}."));
+
+        double gammaW = doc.WaterUnitWeight ?? 9.81;
+        if (!double.IsFinite(gammaW) || gammaW <= 0)
+            problems.Add(new("/waterUnitWeight", "must be a positive number (kN/m³)."));
+
+        var soils = ReadSoils(doc.Soils, unitFactor, problems);
+        var zones = ReadZones(doc.Zones, soils, reader, problems, warnings);
+        int vertexCount = (doc.Zones?.Sum(z => z.Outline?.Count ?? 0) ?? 0) + (doc.Heads?.Sum(h => h.Along?.Count ?? 0) ?? 0)
+            + (doc.Drains?.Sum(h => h.Along?.Count ?? 0) ?? 0) + (doc.Structures?.Sum(s => s.Base?.Count ?? 0) ?? 0)
+            + 2 * (doc.Cutoffs?.Count ?? 0);
+        if (vertexCount > MaxVertices)
+            problems.Add(new("", $"has {vertexCount} vertices; at most {MaxVertices} are accepted."));
+
+        Domain? domain = null;
+        double tolerance = 1e-6;
+        if (zones is not null && zones.Count > 0 && problems.All(p => !p.Pointer.StartsWith("/zones", StringComparison.Ordinal)))
+        {
+            domain = new Domain(zones.Select(z => z.Outline));
+            double extent = Extent(zones);
+            tolerance = 1e-7 * extent;
+            ZoneTilingCheck.Check(domain, tolerance, problems);
+        }
+
+        var structures = ReadPolylines(doc.Structures?.Select(s => (s.Name, s.Base)).ToList(), "/structures", "base", "structure",
+            "the base polyline", domain, tolerance, reader, problems)
+            .Where(x => x.Line is not null).Select(x => new Structure(x.Name, x.Line!)).ToList();
+        var heads = ReadHeads(doc.Heads, domain, tolerance, reader, problems);
+        var drains = ReadPolylines(doc.Drains?.Select(d => (d.Name, d.Along)).ToList(), "/drains", "along", "drain",
+            "the drain polyline", domain, tolerance, reader, problems)
+            .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
+        var cutoffs = CutoffReader.Read(doc.Cutoffs, domain, tolerance, reader, problems);
+
+        if (doc.Heads is not null && heads.Count > 0 && drains.Count == 0 && heads.Select(h => h.Total).Distinct().Count() == 1
+            && problems.All(p => !p.Pointer.StartsWith("/heads", StringComparison.Ordinal)))
+            problems.Add(new("/heads", $"every fixed head is {heads[0].Total} m and there is no drain: nothing drives a flow."));
+
+        var exit = ReadExit(doc.ExitCheck, heads, domain, tolerance, reader, problems);
+        double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? 1.5;
+        if (!double.IsFinite(heaveFactor) || heaveFactor <= 0)
+            problems.Add(new("/heaveCheck/requiredFactor", "must be a positive number."));
+        var mesh = ReadMesh(doc.Mesh, zones, domain, problems);
+
+        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
+            problems.Add(new("/structureLength", "must be a positive length in metres."));
+
+        if (problems.Count > 0 || zones is null || exit is null || mesh is null)
+            return new ValidationOutcome(null, problems);
+
+        var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
+            exit, heaveFactor, mesh, doc.StructureLength, warnings);
+        return new ValidationOutcome(model, problems);
+    }
+
+    private static List<Soil> ReadSoils(List<SoilDocument>? docs, double unitFactor, List<SectionProblem> problems)
+    {
+        var soils = new List<Soil>();
+        if (docs is null || docs.Count == 0) { problems.Add(new("/soils", "at least one soil is required.")); return soils; }
+        var seen = new HashSet<string>();
+        for (int i = 0; i < docs.Count; i++)
+        {
+            var s = docs[i]; string at = $"/soils/{i}";
+            if (s is null) { problems.Add(new(at, "must be an object.")); continue; }
+            if (string.IsNullOrWhiteSpace(s.Id)) problems.Add(new($"{at}/id", "is required (a name the zones refer to)."));
+            else if (!seen.Add(s.Id)) problems.Add(new($"{at}/id", $"'{s.Id}' is used by an earlier soil; ids must be unique."));
+            double kx = s.Kx ?? double.NaN;
+            if (s.Kx is null) problems.Add(new($"{at}/kx", "is required: hydraulic conductivity along the bedding."));
+            else if (!double.IsFinite(kx) || kx <= 0) problems.Add(new($"{at}/kx", "must be a positive, finite conductivity."));
+            double ky = s.Ky ?? kx;
+            if (s.Ky is { } kyv && (!double.IsFinite(kyv) || kyv <= 0)) problems.Add(new($"{at}/ky", "must be a positive, finite conductivity."));
+            double angle = s.BeddingAngle ?? 0;
+            if (!double.IsFinite(angle) || Math.Abs(angle) > 90) problems.Add(new($"{at}/beddingAngle", "must be an angle in degrees between -90 and 90."));
+            if (s.SpecificGravity is { } gs && (!double.IsFinite(gs) || gs <= 1 || gs > 5)) problems.Add(new($"{at}/specificGravity", "must lie between 1 and 5."));
+            if (s.VoidRatio is { } e && (!double.IsFinite(e) || e <= 0 || e > 10)) problems.Add(new($"{at}/voidRatio", "must lie between 0 and 10."));
+            if (s.SaturatedUnitWeight is { } gsat && (!double.IsFinite(gsat) || gsat <= 0)) problems.Add(new($"{at}/saturatedUnitWeight", "must be a positive unit weight in kN/m³."));
+            soils.Add(new Soil(s.Id ?? $"soil {i}", kx * unitFactor, ky * unitFactor, angle, s.SpecificGravity, s.VoidRatio,
+                s.SaturatedUnitWeight, s.CreepClass));
+        }
+        return soils;
+    }
+
+    private static List<Zone>? ReadZones(List<ZoneDocument>? docs, List<Soil> soils, PointReader reader,
+        List<SectionProblem> problems, List<string> warnings)
+    {
+        if (docs is null || docs.Count == 0) { problems.Add(new("/zones", "at least one zone is required.")); return null; }
+        var zones = new List<Zone>();
+        for (int i = 0; i < docs.Count; i++)
+        {
+            var z = docs[i]; string at = $"/zones/{i}";
+            if (z is null) { problems.Add(new(at, "must be an object.")); continue; }
+            int soil = soils.FindIndex(s => s.Id == z.Soil);
+            if (z.Soil is null) problems.Add(new($"{at}/soil", "is required: the id of one of the soils."));
+            else if (soil < 0) problems.Add(new($"{at}/soil", $"'{z.Soil}' is not the id of any soil."));
+            if (z.Size is { } size && (!double.IsFinite(size) || size <= 0)) problems.Add(new($"{at}/size", "must be a positive length in metres."));
+            var ring = reader.Polyline(z.Outline, $"{at}/outline", 3, "the zone outline");
+            if (ring is null) continue;
+            if (ring.Count > 3 && ring[0].NearlyEquals(ring[^1], 1e-12 * (1 + ring[0].Length))) ring.RemoveAt(ring.Count - 1);
+            if (ring.Count < 3) { problems.Add(new($"{at}/outline", "needs at least 3 distinct points.")); continue; }
+            var polygon = Domain.ToPolygon(ring);
+            if (!polygon.IsValid || Math.Abs(PolygonMath.SignedArea(ring)) <= 0)
+            {
+                problems.Add(new($"{at}/outline", "intersects itself (or has zero area); an outline must be a simple polygon."));
+                continue;
+            }
+            if (PolygonMath.SignedArea(ring) < 0)
+            {
+                ring.Reverse();
+                warnings.Add($"Zone {i} outline was clockwise and has been reversed.");
+            }
+            zones.Add(new Zone(Math.Max(soil, 0), ring, z.Size));
+        }
+        return zones;
+    }
+
+    // Returns one entry per input item (Line null where it could not be read), so indices stay aligned.
+    private static List<(string Name, List<Point2>? Line)> ReadPolylines(List<(string? Name, List<double[]>? Line)>? docs,
+        string collection, string member, string kind, string what, Domain? domain, double tolerance, PointReader reader,
+        List<SectionProblem> problems)
+    {
+        var result = new List<(string, List<Point2>?)>();
+        if (docs is null) return result;
+        for (int i = 0; i < docs.Count; i++)
+        {
+            string at = $"{collection}/{i}/{member}";
+            var line = reader.Polyline(docs[i].Line, at, 2, what);
+            result.Add((docs[i].Name ?? $"{kind} {i + 1}", line));
+            if (line is null) continue;
+            if (domain is not null && !domain.PolylineOnBoundary(line, tolerance * 10))
+                problems.Add(new(at, $"does not lie on the boundary of the zones; a {kind} must run along the edge of the domain."));
+        }
+        return result;
+    }
+
+    private static List<HeadBoundary> ReadHeads(List<HeadDocument>? docs, Domain? domain, double tolerance, PointReader reader,
+        List<SectionProblem> problems)
+    {
+        if (docs is null || docs.Count == 0)
+        {
+            problems.Add(new("/heads", "at least one fixed total head is required; without one the head field is undetermined."));
+            return [];
+        }
+        var lines = ReadPolylines(docs.Select(d => (d?.Name, d?.Along)).ToList(), "/heads", "along", "head boundary",
+            "the head polyline", domain, tolerance, reader, problems);
+        var heads = new List<HeadBoundary>();
+        for (int i = 0; i < docs.Count; i++)
+        {
+            if (docs[i].Total is not { } total || !double.IsFinite(total))
+                problems.Add(new($"/heads/{i}/total", "is required: the total head in metres."));
+            else if (lines[i].Line is { } line)
+                heads.Add(new HeadBoundary(lines[i].Name, line, total));
+        }
+        return heads;
+    }
+
+    private static ExitCheck? ReadExit(ExitCheckDocument? doc, List<HeadBoundary> heads, Domain? domain, double tolerance,
+        PointReader reader, List<SectionProblem> problems)
+    {
+        double depth = doc?.Depth ?? 0.5;
+        if (!double.IsFinite(depth) || depth <= 0) problems.Add(new("/exitCheck/depth", "must be a positive depth in metres."));
+        double required = doc?.RequiredFactor ?? 3.0;
+        if (!double.IsFinite(required) || required <= 0) problems.Add(new("/exitCheck/requiredFactor", "must be a positive number."));
+        IReadOnlyList<Point2>? along;
+        if (doc?.Along is not null)
+        {
+            along = reader.Polyline(doc.Along, "/exitCheck/along", 2, "the exit surface");
+            if (along is not null && domain is not null && !domain.PolylineOnBoundary(along, tolerance * 10))
+                problems.Add(new("/exitCheck/along", "does not lie on the boundary of the zones."));
+        }
+        else along = heads.Count > 0 ? heads.MinBy(h => h.Total)!.Along : null;
+        return along is null ? null : new ExitCheck(along, depth, required, doc?.Along is not null);
+    }
+
+    private static MeshSettings? ReadMesh(MeshDocument? doc, List<Zone>? zones, Domain? domain, List<SectionProblem> problems)
+    {
+        if (zones is null || zones.Count == 0) return null;
+        double extent = Extent(zones);
+        double size = doc?.Size ?? Math.Min(2.0, extent / 60);
+        double minAngle = doc?.MinAngle ?? 28;
+        if (!double.IsFinite(size) || size <= 0) { problems.Add(new("/mesh/size", "must be a positive edge length in metres.")); return null; }
+        if (!double.IsFinite(minAngle) || minAngle < 10 || minAngle > 33)
+            problems.Add(new("/mesh/minAngle", "must lie between 10° and 33° (larger bounds may not terminate)."));
+        if (domain is not null)
+        {
+            double estimate = domain.Area / (0.433 * size * size);
+            if (estimate > MaxEstimatedTriangles)
+                problems.Add(new("/mesh/size", FormattableString.Invariant(
+                    $"{size} m gives about {estimate:E2} triangles; at most {MaxEstimatedTriangles:E1} are accepted.")));
+        }
+        return new MeshSettings(size, minAngle);
+    }
+
+    private static double Extent(IEnumerable<Zone> zones)
+    {
+        var pts = zones.SelectMany(z => z.Outline).ToList();
+        return Math.Max(pts.Max(p => p.X) - pts.Min(p => p.X), pts.Max(p => p.Y) - pts.Min(p => p.Y));
+    }
+}
