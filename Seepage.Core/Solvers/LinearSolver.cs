@@ -12,6 +12,7 @@ public static class LinearSolver
     {
         var clock = Stopwatch.StartNew();
         if (b.Length != a.Size || x.Length != a.Size) throw new ArgumentException("b and x must have one entry per row of a.");
+        if (a.Size == 0) return new SolveReport("none (no unknowns)", 0, 0, 0, 0, clock.Elapsed.TotalSeconds, 0);
         var diagonal = CheckedDiagonal(a);
         IPreconditioner m = options.Preconditioner switch
         {

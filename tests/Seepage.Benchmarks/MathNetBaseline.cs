@@ -15,7 +15,7 @@ namespace Seepage.Benchmarks;
 internal static class MathNetBaseline
 {
     public static (double Seconds, int Iterations, double TrueResidual) Solve(CsrMatrix a, double[] b, double tolerance, int maxIterations,
-        bool modified = true)
+        bool modified = true, double startPerturbation = 0)
     {
         var clock = System.Diagnostics.Stopwatch.StartNew();
         var storage = SparseCompressedRowMatrixStorage<double>.OfCompressedSparseRowFormat(a.Size, a.Size, a.NonZeros,
@@ -23,6 +23,11 @@ internal static class MathNetBaseline
         var matrix = new SparseMatrix(storage);
         var rhs = DenseVector.OfArray(b);
         var x = DenseVector.Create(a.Size, 0);
+        if (startPerturbation > 0)
+        {
+            var random = new Random(7);
+            for (int i = 0; i < a.Size; i++) x[i] = startPerturbation * (random.NextDouble() - 0.5);
+        }
         var criterion = new RelativeResidualCriterion(tolerance);
         var counter = new IterationCountStopCriterion<double>(maxIterations);
         var iterator = new Iterator<double>(criterion, counter);

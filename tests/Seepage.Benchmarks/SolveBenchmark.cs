@@ -9,12 +9,16 @@ namespace Seepage.Benchmarks;
 /// <c>solve unknowns=N seconds=median iterations=n baselineSeconds=median ratio=baseline/ours</c>,
 /// seconds = AMG setup + PCG solve to ‖r‖₂/‖b‖₂ ≤ 1e-8; the baseline (MathNet BiCgStab + MILU0, same
 /// matrix, rhs and residual; if its default modified MILU0 breaks down, the unmodified variant, ILU(0), is
-/// timed and a note goes to stderr) runs up to 250k unknowns only (nan above). Then the process peak working set.
+/// timed from a slightly perturbed start and a note goes to stderr) runs up to 250k unknowns only (nan above). Then the process peak working set.
 /// The matrices come from <see cref="LayeredSectionGenerator"/> (a stand-in for the real pipeline).</summary>
 public static class SolveBenchmark
 {
     private const double Tolerance = 1e-8;
     private const int BaselineLimit = 250_000;
+    /// <summary>Start of the unmodified baseline: uniform random heads in ±0.5e-6 m. From x₀ = 0 the shadow
+    /// residual r̃ = b is nonzero only next to the fixed heads and BiCgStab can meet an exact ρ = r̃ᵀr = 0
+    /// breakdown (seen at 250k unknowns); the perturbation makes r̃ dense and costs no accuracy.</summary>
+    private const double StartPerturbation = 1e-6;
 
     public static void Run(string[] args)
     {
@@ -48,10 +52,10 @@ public static class SolveBenchmark
                 for (int k = 0; k < baselineRepeats; k++)
                 {
                     double seconds, residual; int iterations;
-                    try { (seconds, iterations, residual) = MathNetBaseline.Solve(a, b, Tolerance, 200_000, modified); }
+                    try { (seconds, iterations, residual) = MathNetBaseline.Solve(a, b, Tolerance, 200_000, modified, modified ? 0 : StartPerturbation); }
                     catch (MathNet.Numerics.NumericalBreakdownException) when (modified)
                     {
-                        Console.Error.WriteLine("  baseline: BiCgStab + MILU0 (modified) broke down; using MILU0Preconditioner(modified: false) = ILU(0)");
+                        Console.Error.WriteLine("  baseline: BiCgStab + MILU0 (modified) broke down; using MILU0Preconditioner(modified: false) = ILU(0) from a perturbed start");
                         modified = false; k--; continue;
                     }
                     baseTimes.Add(seconds);
@@ -73,7 +77,7 @@ public static class SolveBenchmark
         var problem = new LayeredSectionGenerator(30_000);
         for (int k = 0; k < 2; k++)
             LinearSolver.Solve(problem.Matrix, problem.Rhs, new double[problem.Matrix.Size], new SolverOptions { RelativeTolerance = Tolerance });
-        MathNetBaseline.Solve(problem.Matrix, problem.Rhs, Tolerance, 200_000, modified: false);
+        MathNetBaseline.Solve(problem.Matrix, problem.Rhs, Tolerance, 200_000, modified: false, StartPerturbation);
     }
 
     private static double TrueResidual(CsrMatrix a, double[] b, double[] x)
