@@ -13,6 +13,7 @@ app.UseSeepageOpenApi();
 app.MapAnalysisEndpoints();
 app.MapSectionEndpoints();
 app.MapExampleEndpoints();
+app.MapImportEndpoints();
 app.LogPageAddress();
 app.Run();
 
