@@ -14,6 +14,7 @@ app.MapAnalysisEndpoints();
 app.MapSectionEndpoints();
 app.MapExampleEndpoints();
 app.MapImportEndpoints();
+app.MapStudyEndpoints();
 app.LogPageAddress();
 app.Run();
 
