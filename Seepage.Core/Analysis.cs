@@ -59,7 +59,8 @@ public static class Analysis
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>
     public static Mesh MakeMesh(SectionModel section, List<string> warnings, CancellationToken cancellation = default)
     {
-        var options = new MeshOptions { Size = section.Mesh.Size, MinAngle = section.Mesh.MinAngle };
+        // Strong grading at singular points (tips, corners): the flow error there dominates otherwise.
+        var options = new MeshOptions { Size = section.Mesh.Size, MinAngle = section.Mesh.MinAngle, SingularRefinement = 0.02 };
         var graph = SectionGraphBuilder.Build(section, options);
         var mesh = QualityMesher.Build(graph, options, cancellation);
         warnings.AddRange(mesh.Warnings);

@@ -64,9 +64,10 @@ public static class ExitGradientCalculator
 
     private static void WarnIfSingular(SectionModel section, Point2 at, double depth, List<string> warnings)
     {
+        // A cutoff's face at the ground is not singular (the wall meets the surface at a right angle), but its tip is.
         foreach (var c in section.Cutoffs)
-            if (c.Top.DistanceTo(at) <= Math.Max(depth, 1e-3 * section.Extent))
-                warnings.Add($"Exit gradient: the maximum sits at the face of cutoff '{c.Name}', a singular point; the value is the average over the stated depth, not a point value.");
+            if (c.Tip.DistanceTo(at) <= depth * 1.5)
+                warnings.Add($"Exit gradient: the maximum sits by the tip of cutoff '{c.Name}', a singular point; the value is the average over the stated depth, not a point value.");
         foreach (var s in section.Structures)
             foreach (var end in new[] { s.Base[0], s.Base[^1] })
                 if (end.DistanceTo(at) <= Math.Max(depth, 1e-3 * section.Extent) && section.Cutoffs.All(c => c.Top.DistanceTo(end) > 1e-6 * section.Extent))

@@ -102,7 +102,7 @@ public sealed record HeaveCheckDocument
     public double? RequiredFactor { get; init; }
 }
 
-/// <summary>Mesh request: target edge length in m (default: the domain's larger extent / 60, at most 2 m),
+/// <summary>Mesh request: target edge length in m (default: the domain's larger extent / 100, at most a third of the shortest cutoff),
 /// minimum angle in degrees (default 28).</summary>
 public sealed record MeshDocument
 {
