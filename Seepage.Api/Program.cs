@@ -15,6 +15,7 @@ app.MapSectionEndpoints();
 app.MapExampleEndpoints();
 app.MapImportEndpoints();
 app.MapStudyEndpoints();
+app.MapReportEndpoints();
 app.LogPageAddress();
 app.Run();
 
