@@ -22,7 +22,9 @@ public static class ReportEndpoints
                 "and sources, mesh and solver statistics. Vector figures (inline SVG; PDF drawing). Built from the stored analysis.")
             .Produces(StatusCodes.Status200OK, contentType: "text/html")
             .Produces(StatusCodes.Status200OK, contentType: Pdf)
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .ProducesProblem(StatusCodes.Status400BadRequest)
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .ProducesProblem(StatusCodes.Status503ServiceUnavailable);
         analyses.MapGet("/{id}/uplift.csv", UpliftCsv)
             .WithName("GetUpliftCsv")
             .WithSummary("Uplift stations as CSV")
@@ -42,7 +44,9 @@ public static class ReportEndpoints
                 "exitGradient|exitFactor, default flow) against the first varied member whose values are numbers.")
             .Produces(StatusCodes.Status200OK, contentType: "text/html")
             .Produces(StatusCodes.Status200OK, contentType: Pdf)
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .ProducesProblem(StatusCodes.Status400BadRequest)
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .ProducesProblem(StatusCodes.Status503ServiceUnavailable);
         return app;
     }
 
