@@ -35,10 +35,23 @@ public static class StudyReportBuilder
 
         var (label, read) = Figures[figure];
         var (parameter, xs) = Abscissa(study);
-        var points = study.Rows.Select((r, i) => (X: xs[i], Y: read(r))).Where(p => p.X is not null && p.Y is not null)
-            .Select(p => new FigurePoint(p.X!.Value, p.Y!.Value)).OrderBy(p => p.X).ToList();
-        var chart = new Figure(parameter ?? "alternative number", label, false,
-            [new FigureItem(points, "#1f5fbf", 1.5, Markers: true)], [new LegendEntry("#1f5fbf", label)]);
+        var chart = new Figure(parameter ?? "alternative number", label, false, [], []);
+        string[] colors = ["#1f5fbf", "#c0392b", "#2a9d4a", "#8e44ad", "#d35400", "#16a085", "#555555"];
+        // One line per combination of the other varied members, so a two-way study draws a family of curves.
+        var others = study.Parameters.Where(p => p != parameter).ToList();
+        var series = study.Rows.Select((r, i) => (Row: r, X: xs[i], Y: read(r)))
+            .Where(p => p.X is not null && p.Y is not null)
+            .GroupBy(p => string.Join(", ", others.Select(o => $"{o} = {(p.Row.Changes.TryGetValue(o, out var v) ? Text(v) : "base")}")))
+            .ToList();
+        var items = new List<FigureItem>();
+        var legend = new List<LegendEntry>();
+        for (int k = 0; k < series.Count; k++)
+        {
+            string color = colors[k % colors.Length];
+            items.Add(new FigureItem(series[k].Select(p => new FigurePoint(p.X!.Value, p.Y!.Value)).OrderBy(p => p.X).ToList(), color, 1.5, Markers: true));
+            legend.Add(new LegendEntry(color, series[k].Key.Length == 0 ? label : series[k].Key));
+        }
+        chart = chart with { Items = items, Legend = legend };
 
         var blocks = new List<ReportBlock>
         {
