@@ -2,7 +2,7 @@ using System.Text.Json.Nodes;
 
 namespace Seepage.Api.Contracts;
 
-/// <summary>A study of design alternatives: its state (<c>running</c>, <c>done</c>, <c>failed</c>, <c>cancelled</c>), how many
+/// <summary>A study of design alternatives: its state (<c>running</c>, <c>done</c>, <c>failed</c>, <c>cancelled</c>, or <c>interrupted</c> when the server stopped while it ran), how many
 /// of the <c>total</c> alternatives are <c>done</c>, the varied members (JSON pointers) and the rows finished so far, in the
 /// alternatives' order. <c>seconds</c> is the wall time so far.</summary>
 public sealed record StudyDto(

@@ -56,8 +56,16 @@ public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHo
         return Snapshot(run);
     }
 
-    public async Task<StudyDto?> GetAsync(string id, CancellationToken cancellation) =>
-        await studies.GetJsonAsync(id, cancellation) is { } json ? JsonSerializer.Deserialize<StudyDto>(json, AnalysisService.Json) : null;
+    /// <summary>A study still "running" that no process has written to for this long was cut off (the server stopped);
+    /// one alternative's solve is limited to <see cref="AnalysisService.SolveBudget"/>, well below it.</summary>
+    public static readonly TimeSpan SilenceLimit = TimeSpan.FromMinutes(10);
+
+    public async Task<StudyDto?> GetAsync(string id, CancellationToken cancellation)
+    {
+        if (await studies.GetJsonAsync(id, cancellation) is not { } stored) return null;
+        var study = JsonSerializer.Deserialize<StudyDto>(stored.Json, AnalysisService.Json)!;
+        return study.Status == "running" && DateTimeOffset.UtcNow - stored.Updated > SilenceLimit ? study with { Status = "interrupted" } : study;
+    }
 
     private async Task ExecuteAsync(Run run, JsonObject baseSection, CancellationToken cancellation)
     {
