@@ -21,31 +21,30 @@ public static class Analysis
         var warnings = new List<string>(section.Warnings);
 
         var mesh = MakeMesh(section, warnings, cancellation);
-        var tensors = section.Zones.Select(z => ConductivityTensor.Of(section.Soils[z.Soil])).ToList();
-        var boundary = new MeshBoundary(mesh);
+        var solution = FieldSolver.Solve(section, mesh, section.Mesh.Order, options.Solver, cancellation);
+        var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
         double tolerance = 1e-6 * section.Extent;
-        var fixedHeads = FixedHeadBuilder.Build(mesh, boundary, section, tolerance);
-        var pattern = SparsityPattern.Of(mesh);
-        var full = GlobalAssembler.Assemble(mesh, pattern, tensors);
-        var system = LinearSystem.Condense(full, fixedHeads);
 
-        var free = new double[system.Matrix.Size];
-        var report = LinearSolver.Solve(system.Matrix, system.Rhs, free, options.Solver, cancellation);
-        var heads = system.Expand(free);
-        var field = new HeadField(mesh, heads, tensors);
-
-        var (flow, _) = FlowCalculator.Compute(system, heads, boundary, section, tolerance);
+        var (flow, _) = FlowCalculator.Compute(solution.System, field.Heads, boundary, section, tolerance, solution.Quadratic);
         var sampler = new FieldSampler(field);
         var uplift = UpliftCalculator.Compute(section, field, boundary, tolerance);
         var exit = ExitGradientCalculator.Compute(section, sampler, boundary, tolerance, warnings);
         var heave = HeaveCalculator.Compute(section, sampler, warnings);
         var exitSoil = ExitSoil(section, sampler, exit);
         var creep = CreepCalculator.Compute(section, exitSoil);
+        var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
+        var gauges = GaugeCalculator.Compute(section, sampler);
+        var convergence = section.Mesh.ConvergenceCheck
+            ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
+        var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
+            ? TruncationCheck.Run(section, flow.PerMetre, section.Mesh.Order, s => MakeMesh(s, [], cancellation), options.Solver, warnings, cancellation)
+            : null;
 
         FlowNet? net = null;
         if (options.FlowNet)
         {
-            var psi = StreamFunctionSolver.Solve(field, boundary, pattern, fixedHeads.IsFixed, warnings, cancellation);
+            // The flow net is drawn from the vertex heads (the P1 part of a quadratic field).
+            var psi = StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
             net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops);
@@ -53,7 +52,7 @@ public static class Analysis
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
         return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
-            clock.Elapsed.TotalSeconds);
+            clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>

@@ -11,22 +11,30 @@ public static class ResultMapper
     {
         var f = r.Flow;
         var flow = new FlowDto(f.PerMetre, "m³/s per m", f.Inflow, f.Outflow, f.Balance, f.PerMetre * 86_400, f.PerMetre * 60_000,
-            f.Boundaries.Select(b => new BoundaryFlowDto(b.Name, b.Kind, b.Flow)).ToList());
+            f.Boundaries.Select(b => new BoundaryFlowDto(b.Name, b.Kind, b.Flow)).ToList(),
+            r.Section.StructureLength, f.PerMetre * r.Section.StructureLength, f.PerMetre * r.Section.StructureLength * 86_400);
         var uplift = r.Uplift.Select(u => new UpliftDto(u.Structure,
             u.Stations.Select(s => new UpliftStationDto(s.X, s.Y, s.Head, s.Pressure)).ToList(),
-            u.Force, u.CentroidX, u.MomentAboutDownstreamToe)).ToList();
+            u.Force, u.CentroidX, u.MomentAboutDownstreamToe, u.DownstreamToeX,
+            u.Junctions.Select(j => new UpliftJunctionDto(j.Cutoff, j.X, j.UpstreamFacePercent, j.DownstreamFacePercent)).ToList())).ToList();
         ExitDto? exit = r.Exit is { } e
             ? new ExitDto(e.MaxGradient, [e.AtX, e.AtY], e.CriticalGradient, e.Factor, e.RequiredFactor, e.Pass, e.Depth, e.Method,
-                e.Profile.Select(p => new ExitProfilePointDto(p.X, p.Gradient)).ToList())
+                e.Profile.Select(p => new ExitProfilePointDto(p.X, p.Gradient, p.RowGradient)).ToList(),
+                e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY])
             : null;
-        var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass)).ToList();
+        var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass,
+            h.EffectiveWeight, h.UpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
         CreepDto? creep = r.Creep is { } c ? new CreepDto(Creep(c.Lane), Creep(c.Bligh)) : null;
         var q = r.Mesh.Quality;
         var mesh = new MeshStatsDto(q.Nodes, q.Triangles, q.MinAngle, q.MaxAngle, q.MinAngleHistogram, q.Seconds);
         var s = r.Solver;
         var solver = new SolverStatsDto(s.Method, s.Levels, s.OperatorComplexity, s.Unknowns, s.Iterations, s.Residual, s.Seconds);
         return new AnalysisResultDto(id, r.Section.Title, createdAt, flow, uplift, exit, heave, creep, mesh, solver,
-            r.Warnings, AnalysisResult.Caution, r.Seconds);
+            r.Warnings, AnalysisResult.Caution, r.Seconds, Independent(r.IndependentVariables),
+            r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length)).ToList(),
+            r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
+                new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
+            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null);
     }
 
     public static FieldDto ToFieldDto(string id, AnalysisResult r)
@@ -42,9 +50,16 @@ public static class ResultMapper
         var counts = new FlowNetDto(net?.FlowChannels ?? 0, net?.HeadDrops ?? 0, net?.ShapeFactor ?? 0, net?.HeadDifference ?? 0);
         var walls = r.Section.Cutoffs.Select(c => Line([c.Top, c.Tip]))
             .Concat(r.Section.Structures.Select(s => Line(s.Base))).ToList();
-        return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Select(h => Math.Round(h, 6)).ToArray(),
+        return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
             equipotentials, flowLines, counts, walls);
     }
+
+    private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :
+        new(v.Structure, v.FloorLength, v.HeadDifference,
+            v.Piles.Select(p => new KeyPointPileDto(p.Cutoff, p.Position, p.X, p.Depth, Key(p.E), Key(p.D), Key(p.C))).ToList(),
+            v.ExitGradient, v.FeExitGradient, v.FeRowExitGradient, v.CorrectionsApplied, v.CorrectionsNotApplied, v.Notes, v.Source);
+
+    private static KeyPointDto Key(KeyPoint k) => new(k.Basic, k.Correction, k.Corrected, k.Fe, k.Difference);
 
     private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source);
 

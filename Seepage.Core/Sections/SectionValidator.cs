@@ -70,6 +70,8 @@ public static class SectionValidator
             problems.Add(new("/heaveCheck/requiredFactor", "must be a positive number."));
         var mesh = ReadMesh(doc.Mesh, zones, cutoffs, domain, problems);
 
+        var gauges = ReadGauges(doc.Gauges, reader, problems);
+
         if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
             problems.Add(new("/structureLength", "must be a positive length in metres."));
 
@@ -77,7 +79,7 @@ public static class SectionValidator
             return new ValidationOutcome(null, problems);
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings);
+            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck };
         return new ValidationOutcome(model, problems);
     }
 
@@ -216,7 +218,22 @@ public static class SectionValidator
                 problems.Add(new("/mesh/size", FormattableString.Invariant(
                     $"{size} m gives about {estimate:E2} triangles; at most {MaxEstimatedTriangles:E1} are accepted.")));
         }
-        return new MeshSettings(size, minAngle);
+        int order = doc?.Order ?? 1;
+        if (order is not (1 or 2)) problems.Add(new("/mesh/order", "must be 1 (linear triangles) or 2 (quadratic triangles)."));
+        return new MeshSettings(size, minAngle) { Order = order, ConvergenceCheck = doc?.ConvergenceCheck ?? false };
+    }
+
+    private static List<Gauge> ReadGauges(List<GaugeDocument>? docs, PointReader reader, List<SectionProblem> problems)
+    {
+        var gauges = new List<Gauge>();
+        if (docs is null) return gauges;
+        for (int i = 0; i < docs.Count; i++)
+        {
+            if (docs[i] is not { } g) { problems.Add(new($"/gauges/{i}", "must be an object.")); continue; }
+            if (reader.Polyline(g.Along, $"/gauges/{i}/along", 2, "the gauge polyline") is { } line)
+                gauges.Add(new Gauge(g.Name ?? $"gauge {i + 1}", line));
+        }
+        return gauges;
     }
 
     private static double Extent(IEnumerable<Zone> zones)
