@@ -32,6 +32,22 @@ internal sealed class SizeField
     /// <summary>The smallest size anywhere, metres.</summary>
     public double Smallest { get; }
 
+    /// <summary>Rough number of triangles refinement will make in triangle t of <paramref name="tri"/>:
+    /// about 4.2 per h² of area (measured on the benchmark section: edges end up shorter than h).</summary>
+    public double EstimateTriangles(Triangulation tri, int t)
+    {
+        int a = tri.V[3 * t], b = tri.V[3 * t + 1], c = tri.V[3 * t + 2];
+        double area = 0.5 * Math.Abs((tri.X[b] - tri.X[a]) * (tri.Y[c] - tri.Y[a]) - (tri.Y[b] - tri.Y[a]) * (tri.X[c] - tri.X[a]));
+        double gx = (tri.X[a] + tri.X[b] + tri.X[c]) / 3, gy = (tri.Y[a] + tri.Y[b] + tri.Y[c]) / 3;
+        double sum = 0;
+        foreach (var (px, py) in new[] { (gx, gy), (tri.X[a], tri.Y[a]), (tri.X[b], tri.Y[b]), (tri.X[c], tri.Y[c]) })
+        {
+            double h = At(0.5 * (px + gx), 0.5 * (py + gy), tri.Zone[t]);
+            sum += 1 / (h * h);
+        }
+        return 4.2 * area * sum / 4;
+    }
+
     public double At(double x, double y, int zone)
     {
         double h = zone >= 0 && zone < _zoneSize.Length ? _zoneSize[zone] : _defaultSize;
