@@ -29,6 +29,7 @@ public static class QualityMesher
         var tri = InitialTriangulation.Build(clean, graph, warnings);
         cancellation.ThrowIfCancellationRequested();
         var size = new SizeField(graph, options);
+        size.AddZoneInterfaces(tri, clean);
         var rules = new TriangleRules(tri, clean, size, options);
         double estimate = 0;
         for (int t = 0; t < tri.TriangleSlots; t++)

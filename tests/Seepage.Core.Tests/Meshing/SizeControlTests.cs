@@ -7,8 +7,12 @@ public class SizeControlTests
 {
     // Refinement stops when √3·R ≤ h at the centroid, and the longest edge of a triangle is at most 2R,
     // so every edge is at most 2/√3 ≈ 1.155 times the wanted size there (elementary geometry).
-    private static double Wanted(double x, double y, int zone, double size, double zoneSize, Point2 target, double targetSize, double grading) =>
-        Math.Min(zone == 1 ? Math.Min(size, zoneSize) : size, targetSize + (grading - 1) * new Point2(x, y).DistanceTo(target));
+    // Zone 1 (below y = −6) asks for zoneSize; zone 0 grades from zoneSize at the interface by (G − 1)·distance.
+    private static double Wanted(double x, double y, int zone, double size, double zoneSize, Point2 target, double targetSize, double grading)
+    {
+        double h = zone == 1 ? Math.Min(size, zoneSize) : Math.Min(size, zoneSize + (grading - 1) * Math.Abs(y + 6));
+        return Math.Min(h, targetSize + (grading - 1) * new Point2(x, y).DistanceTo(target));
+    }
 
     [Fact]
     public void Build_ZoneSizeAndTarget_EdgesWithinWantedSize()
@@ -31,5 +35,15 @@ public class SizeControlTests
         }
         Assert.True(worstRatio <= 2 / Math.Sqrt(3) + 1e-9, $"edge/size ratio {worstRatio}");
         Assert.True(smallestNearTip <= 0.06, $"edges at the tip {smallestNearTip}");
+        // Graded, not jumping: just above the interface zone 0 is nearly as fine as zone 1.
+        double nearInterface = 0;
+        for (int t = 0; t < mesh.TriangleCount; t++)
+        {
+            if (mesh.Zones[t] != 0) continue;
+            var idx = Enumerable.Range(0, 3).Select(i => mesh.Triangles[3 * t + i]).ToArray();
+            if (!idx.Any(v => Math.Abs(mesh.Y[v] + 6) < 1e-12)) continue;
+            nearInterface = Math.Max(nearInterface, Enumerable.Range(0, 3).Max(i => Math.Sqrt(Math.Pow(mesh.X[idx[i]] - mesh.X[idx[(i + 1) % 3]], 2) + Math.Pow(mesh.Y[idx[i]] - mesh.Y[idx[(i + 1) % 3]], 2))));
+        }
+        Assert.True(nearInterface <= 1.0, $"zone 0 edges at the interface {nearInterface}");
     }
 }
