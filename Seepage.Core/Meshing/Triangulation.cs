@@ -27,6 +27,26 @@ internal sealed partial class Triangulation
     private int[] _free = new int[16];
     private int _freeCount;
 
+    /// <summary>Grows the arrays once to hold about <paramref name="triangles"/> triangles and half as many
+    /// vertices, so that refinement does not reallocate (and leave garbage) as it goes.</summary>
+    public void Reserve(int triangles)
+    {
+        int nt = Math.Max(triangles, Zone.Length);
+        if (nt > Zone.Length)
+        {
+            Array.Resize(ref V, 3 * nt); Array.Resize(ref N, 3 * nt); Array.Resize(ref Mark, 3 * nt);
+            Array.Resize(ref Zone, nt);
+            GrowTriangleScratch(nt);
+        }
+        int nv = Math.Max(triangles / 2 + 16, X.Length);
+        if (nv > X.Length)
+        {
+            Array.Resize(ref X, nv); Array.Resize(ref Y, nv);
+            Array.Resize(ref VertexTri, nv); Array.Resize(ref VertexSegment, nv);
+            GrowVertexScratch(nv);
+        }
+    }
+
     public int AddVertex(double x, double y, int segment = -1)
     {
         if (VertexCount == X.Length)

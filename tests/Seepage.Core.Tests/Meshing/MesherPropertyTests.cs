@@ -24,7 +24,7 @@ public class MesherPropertyTests
                 foreach (var (fx, fd) in cutoffs)
                 {
                     double x = Math.Round(fx, 2) * width;
-                    if (s.Cutoffs.Any(c => Math.Abs(c.X - x) < 1e-9) || s.FloorEnds.Any(e => Math.Abs(e - x) < 1e-9 && false)) continue;
+                    if (s.Cutoffs.Any(c => Math.Abs(c.X - x) < 1e-9)) continue;
                     s.Cutoffs.Add((x, fd >= 0.99 ? -depth : -Math.Min(fd, 0.8) * depth));
                 }
                 s.TipSize = floor.Length == 2 ? 0.3 : 0;
@@ -36,14 +36,13 @@ public class MesherPropertyTests
     {
         Sections.Sample(section =>
         {
-            var graph = section.Build();
             double area = (section.Right - section.Left) * -section.Bottom;
             double size = Math.Sqrt(area * 2.3 / 1500);
             if (section.TipSize > 0) section.TipSize = 0.3 * size;
-            graph = section.Build();
+            var graph = section.Build();
             var options = new MeshOptions { Size = size, MinAngle = 28 };
-            // A case that takes more than 10 s means the refinement loops: cancel and fail.
-            using var budget = new CancellationTokenSource(TimeSpan.FromSeconds(10));
+            // A case (about 1,500 triangles) that takes more than 60 s means the refinement loops: cancel and fail.
+            using var budget = new CancellationTokenSource(TimeSpan.FromSeconds(60));
             var mesh = QualityMesher.Build(graph, options, budget.Token);
             var problems = new List<string>();
             problems.AddRange(MeshChecks.CounterClockwise(mesh));
