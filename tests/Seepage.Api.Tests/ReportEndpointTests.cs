@@ -35,6 +35,7 @@ public class ReportEndpointTests
         Assert.Contains("<th>Figure or check</th><th>Method</th><th>Achieved</th><th>Required</th><th>Result</th>", html);
         Assert.Contains("Terzaghi", html);
         Assert.Contains("Lane 1935", html);
+        Assert.Contains("<caption>Truncation check of the lateral boundaries</caption>", html);
         Assert.True(Regex.Matches(html, "<svg ").Count >= 4, "four figures: geometry, flow net, uplift, exit gradient");
     }
 
