@@ -1,6 +1,23 @@
-var builder = WebApplication.CreateBuilder(args);
+using Seepage.Api;
+using Seepage.Api.Endpoints;
+
+var builder = WebApplication.CreateBuilder(new WebApplicationOptions { Args = args, WebRootPath = ServiceSetup.PageFolder() });
+builder.Services.AddSeepageServices(builder.Configuration, builder.Environment);
+builder.Services.AddSeepageOpenApi();
+
 var app = builder.Build();
-
-app.MapGet("/", () => "Hello World!");
-
+app.UseSeepageErrorHandling();
+app.UseDefaultFiles();
+app.UseStaticFiles();
+app.UseSeepageOpenApi();
+app.MapAnalysisEndpoints();
+app.MapSectionEndpoints();
+app.MapExampleEndpoints();
+app.MapImportEndpoints();
+app.MapStudyEndpoints();
+app.MapReportEndpoints();
+app.LogPageAddress();
 app.Run();
+
+/// <summary>Entry point, visible to the integration tests.</summary>
+public partial class Program;

@@ -22,6 +22,19 @@ public sealed record AnalysisResult(
     IReadOnlyList<string> Warnings,
     double Seconds)
 {
+    /// <summary>The method of independent variables beside the FE values (null when the section is not one level
+    /// floor with one to three vertical cutoffs hanging from it).</summary>
+    public IndependentVariableResult? IndependentVariables { get; init; }
+
+    /// <summary>Flow across each gauge of the section, m³/s per m.</summary>
+    public IReadOnlyList<GaugeFlow> Gauges { get; init; } = [];
+
+    /// <summary>Convergence of the key figures over two uniform refinements (null unless mesh.convergenceCheck).</summary>
+    public ConvergenceResult? Convergence { get; init; }
+
+    /// <summary>The lateral-boundary truncation check (null when not run).</summary>
+    public TruncationResult? Truncation { get; init; }
+
     /// <summary>The caution every report carries.</summary>
     public const string Caution =
         "These results depend on the idealised section and the soil data given. They support, and never replace, " +

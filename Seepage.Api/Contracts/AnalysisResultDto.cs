@@ -14,31 +14,47 @@ public sealed record AnalysisResultDto(
     SolverStatsDto Solver,
     IReadOnlyList<string> Warnings,
     string Caution,
-    double Seconds);
+    double Seconds,
+    IndependentVariablesDto? IndependentVariables = null,
+    IReadOnlyList<GaugeDto>? Gauges = null,
+    ConvergenceDto? Convergence = null,
+    TruncationDto? Truncation = null);
 
 /// <summary>Seepage discharge per metre of structure. <c>perMetre</c>, <c>inflow</c>, <c>outflow</c> in m³/s per m;
-/// <c>balance</c> = (inflow − outflow) / inflow, dimensionless.</summary>
+/// <c>balance</c> = (inflow − outflow) / inflow, dimensionless;
+/// <c>structureLength</c> (m, from the section) gives <c>total</c> in m³/s and <c>totalPerDay</c> in m³/day.</summary>
 public sealed record FlowDto(double PerMetre, string Unit, double Inflow, double Outflow, double Balance,
-    double PerMetrePerDay, double LitresPerMinutePerMetre, IReadOnlyList<BoundaryFlowDto> Boundaries);
+    double PerMetrePerDay, double LitresPerMinutePerMetre, IReadOnlyList<BoundaryFlowDto> Boundaries,
+    double? StructureLength = null, double? Total = null, double? TotalPerDay = null);
 
 /// <summary>Flow through one head or drain boundary, m³/s per m, positive into the soil.</summary>
 public sealed record BoundaryFlowDto(string Name, string Kind, double Flow);
 
 /// <summary>Uplift under one structure: stations (x, y in m, total head in m, pore pressure in kPa),
-/// resultant force in kN/m, its x position in m.</summary>
+/// resultant force in kN/m, its x position in m, moment about the downstream toe in kN·m/m;
+/// <c>junctions</c>: the head at each cutoff meeting the base, per cent of the head difference, on both faces.</summary>
 public sealed record UpliftDto(string Structure, IReadOnlyList<UpliftStationDto> Stations, double Force, double CentroidX,
-    double MomentAboutDownstreamToe);
+    double MomentAboutDownstreamToe, double DownstreamToeX = 0, IReadOnlyList<UpliftJunctionDto>? Junctions = null);
+
+public sealed record UpliftJunctionDto(string Cutoff, double X, double UpstreamFacePercent, double DownstreamFacePercent);
 
 public sealed record UpliftStationDto(double X, double Y, double Head, double Pressure);
 
-/// <summary>Exit gradient check. Gradients dimensionless; <c>at</c> = [x, y] in m; <c>depth</c> in m.</summary>
-public sealed record ExitDto(double MaxGradient, double[] At, double CriticalGradient, double Factor, double RequiredFactor,
-    bool Pass, double Depth, string Method, IReadOnlyList<ExitProfilePointDto> Profile);
+/// <summary>Exit gradient check (criticalGradient, factor, pass are null when the exit soil lacks Gs and e). Gradients dimensionless; <c>at</c> = [x, y] in m; <c>depth</c> in m.</summary>
+/// <remarks><c>rowGradientAtMax</c>: the single-element-row gradient (boundary triangle's gradient · inward normal) at the
+/// maximum; <c>maxRowGradient</c> at <c>maxRowAt</c>: the largest such value on the exit surface.</remarks>
+public sealed record ExitDto(double MaxGradient, double[] At, double? CriticalGradient, double? Factor, double RequiredFactor,
+    bool? Pass, double Depth, string Method, IReadOnlyList<ExitProfilePointDto> Profile,
+    double RowGradientAtMax = 0, double MaxRowGradient = 0, double[]? MaxRowAt = null);
 
-public sealed record ExitProfilePointDto(double X, double Gradient);
+/// <summary>Profile point: x in m, gradient averaged over the depth, rowGradient of the element row (dimensionless).</summary>
+public sealed record ExitProfilePointDto(double X, double Gradient, double RowGradient = 0);
 
-/// <summary>Heave check at a cutoff (Terzaghi's prism, width D/2): depth D in m, average excess head in m.</summary>
-public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double Factor, double RequiredFactor, bool Pass);
+/// <summary>Heave check at a cutoff (Terzaghi's prism, width D/2): depth D in m, average excess head in m;
+/// <c>prism</c> = [fromX, toX, surfaceY] in m;
+/// <c>effectiveWeight</c> W′ = γ′·D·D/2 and <c>upliftForce</c> γw·h_a·D/2 in kN/m.</summary>
+public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor, bool? Pass,
+    double? EffectiveWeight = null, double UpliftForce = 0, double[]? Prism = null);
 
 /// <summary>Hand creep checks beside the FE results (lengths in m, ratios dimensionless).</summary>
 public sealed record CreepDto(CreepCheckDto Lane, CreepCheckDto Bligh);
@@ -50,3 +66,18 @@ public sealed record MeshStatsDto(int Nodes, int Triangles, double MinAngle, dou
 
 /// <summary>Linear solver report: iterations, final relative residual, wall time in seconds.</summary>
 public sealed record SolverStatsDto(string Method, int Levels, double OperatorComplexity, int Unknowns, int Iterations, double Residual, double Seconds);
+
+/// <summary>Flow across a gauge polyline, m³/s per m (positive along the normal 90° counter-clockwise from the
+/// walking direction); length of the polyline inside the soil in m.</summary>
+public sealed record GaugeDto(string Name, double Flow, double Length);
+
+/// <summary>Convergence over two uniform refinements: triangles of the three meshes and, per figure, the three values
+/// (unit as named), the observed order, the Richardson estimate and the estimated relative error of the reported value.</summary>
+public sealed record ConvergenceDto(int[] Triangles, IReadOnlyList<ConvergenceFigureDto> Figures);
+
+public sealed record ConvergenceFigureDto(string Name, string Unit, double[] Values, double? ObservedOrder, double? Extrapolated, double EstimatedError);
+
+/// <summary>Truncation check: lateral boundaries (x, m) before and after pushing them out, the flows (m³/s per m)
+/// and the relative change.</summary>
+public sealed record TruncationDto(double LeftX, double RightX, double ExtendedLeftX, double ExtendedRightX, double Flow,
+    double ExtendedFlow, double Change);

@@ -4,18 +4,22 @@ using Seepage.Core.Sections;
 namespace Seepage.Core.Fem;
 
 /// <summary>Fixes the total head on the nodes of head boundaries (h = total) and drains (h = y, zero pressure).
-/// A node on a drain and a head boundary takes the head boundary's value.</summary>
+/// A node on a drain and a head boundary takes the head boundary's value. With quadratic elements the mid nodes
+/// of the boundary edges are fixed as well (h = y is linear along an edge, so P2 carries it exactly).</summary>
 public static class FixedHeadBuilder
 {
-    public static FixedHeads Build(Mesh mesh, MeshBoundary boundary, SectionModel section, double tolerance)
+    public static FixedHeads Build(Mesh mesh, MeshBoundary boundary, SectionModel section, double tolerance,
+        QuadraticDofs? quadratic = null)
     {
-        var isFixed = new bool[mesh.NodeCount];
-        var value = new double[mesh.NodeCount];
+        int count = quadratic?.Count ?? mesh.NodeCount;
+        double[] y = quadratic?.Y ?? mesh.Y;
+        var isFixed = new bool[count];
+        var value = new double[count];
         foreach (var drain in section.Drains)
-            foreach (int n in MeshBoundary.NodesOf(boundary.On(drain.Along, tolerance)))
-            { isFixed[n] = true; value[n] = mesh.Y[n]; }
+            foreach (int n in MeshBoundary.NodesOf(boundary.On(drain.Along, tolerance), quadratic))
+            { isFixed[n] = true; value[n] = y[n]; }
         foreach (var head in section.Heads)
-            foreach (int n in MeshBoundary.NodesOf(boundary.On(head.Along, tolerance)))
+            foreach (int n in MeshBoundary.NodesOf(boundary.On(head.Along, tolerance), quadratic))
             { isFixed[n] = true; value[n] = head.Total; }
         return new FixedHeads(isFixed, value);
     }

@@ -25,4 +25,24 @@ public static class GlobalAssembler
         }
         return new CsrMatrix(pattern.Size, pattern.RowStart, pattern.Columns, values);
     }
+
+    /// <summary>K = Σ_e k_e over the quadratic triangles of <paramref name="dofs"/> (pattern of 6-node elements).</summary>
+    public static CsrMatrix AssembleQuadratic(Mesh mesh, QuadraticDofs dofs, SparsityPattern pattern,
+        IReadOnlyList<ConductivityTensor> zoneTensors)
+    {
+        var values = new double[pattern.Columns.Length];
+        var tri = mesh.Triangles; var x = mesh.X; var y = mesh.Y; var el = dofs.Elements;
+        Span<double> k = stackalloc double[36];
+        for (int t = 0; t < mesh.TriangleCount; t++)
+        {
+            int n0 = tri[3 * t], n1 = tri[3 * t + 1], n2 = tri[3 * t + 2];
+            QuadraticTriangle.Stiffness(x[n0], y[n0], x[n1], y[n1], x[n2], y[n2], zoneTensors[mesh.Zones[t]], k);
+            for (int i = 0; i < 6; i++)
+            {
+                int row = el[6 * t + i];
+                for (int j = 0; j < 6; j++) values[pattern.IndexOf(row, el[6 * t + j])] += k[6 * i + j];
+            }
+        }
+        return new CsrMatrix(pattern.Size, pattern.RowStart, pattern.Columns, values);
+    }
 }

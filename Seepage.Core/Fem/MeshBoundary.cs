@@ -59,4 +59,9 @@ public sealed class MeshBoundary
 
     /// <summary>Distinct nodes of a set of edges.</summary>
     public static IEnumerable<int> NodesOf(IEnumerable<BoundaryEdge> edges) => edges.SelectMany(e => new[] { e.A, e.B }).Distinct();
+
+    /// <summary>Distinct unknowns of a set of edges: the end nodes and, with quadratic elements, the mid nodes.</summary>
+    public static IEnumerable<int> NodesOf(IEnumerable<BoundaryEdge> edges, QuadraticDofs? quadratic) => quadratic is null
+        ? NodesOf(edges)
+        : edges.SelectMany(e => new[] { e.A, e.B, quadratic.Mid(e.A, e.B) }).Distinct();
 }

@@ -12,24 +12,25 @@ public sealed class SparsityPattern
     public int[] RowStart { get; }
     public int[] Columns { get; }
 
-    public static SparsityPattern Of(Mesh mesh)
+    public static SparsityPattern Of(Mesh mesh) => Of(mesh.NodeCount, mesh.Triangles, 3);
+
+    /// <summary>The pattern of elements with <paramref name="perElement"/> nodes each (3 for P1, 6 for P2): every
+    /// node of an element couples to every other node of it.</summary>
+    public static SparsityPattern Of(int n, int[] elements, int perElement)
     {
-        int n = mesh.NodeCount;
-        var tri = mesh.Triangles;
-        // Upper bound per row: 1 + 2 per incident triangle; fill, then sort and compact each row.
+        // Upper bound per row: 1 + (perElement − 1) per incident element; fill, then sort and compact each row.
         var count = new int[n + 1];
-        foreach (int v in tri) count[v + 1] += 2;
+        foreach (int v in elements) count[v + 1] += perElement - 1;
         for (int i = 0; i < n; i++) count[i + 1] += count[i] + 1;
         var start = (int[])count.Clone();
         var fill = new int[count[n]];
         var next = new int[n];
         for (int i = 0; i < n; i++) { fill[start[i]] = i; next[i] = start[i] + 1; }
-        for (int t = 0; t < tri.Length; t += 3)
-            for (int a = 0; a < 3; a++)
+        for (int t = 0; t < elements.Length; t += perElement)
+            for (int a = 0; a < perElement; a++)
             {
-                int i = tri[t + a];
-                fill[next[i]++] = tri[t + (a + 1) % 3];
-                fill[next[i]++] = tri[t + (a + 2) % 3];
+                int i = elements[t + a];
+                for (int b = 1; b < perElement; b++) fill[next[i]++] = elements[t + (a + b) % perElement];
             }
         var rowStart = new int[n + 1];
         int write = 0;

@@ -10,13 +10,18 @@ namespace Seepage.Core.Meshing;
 /// </remarks>
 public sealed class Mesh
 {
-    public Mesh(double[] x, double[] y, int[] triangles, int[] zones, MeshQuality quality)
+    public Mesh(double[] x, double[] y, int[] triangles, int[] zones, MeshQuality quality, IReadOnlyList<string>? warnings = null)
     {
         if (x.Length != y.Length) throw new ArgumentException("x and y differ in length.");
         if (triangles.Length % 3 != 0) throw new ArgumentException("Triangle array length is not a multiple of 3.");
         if (zones.Length != triangles.Length / 3) throw new ArgumentException("One zone per triangle is needed.");
         X = x; Y = y; Triangles = triangles; Zones = zones; Quality = quality;
+        Warnings = warnings ?? Array.Empty<string>();
     }
+
+    /// <summary>What the mesher changed or noticed in the input (merged near-duplicate vertices, vertices
+    /// found on segments, a cutoff that closes the flow path...). Empty when nothing was noticed.</summary>
+    public IReadOnlyList<string> Warnings { get; }
 
     /// <summary>Node x coordinates, metres.</summary>
     public double[] X { get; }

@@ -8,7 +8,10 @@ namespace Seepage.Core.Results;
 /// Exit gradient along the exit surface: at each station p with inward unit normal n, the gradient averaged over
 /// the depth d is i = (h(p + d·n) − h(p)) / d, the upward gradient where the surface is level. The gradient is
 /// singular at cutoff faces and floor corners, so the point value there is mesh-dependent; the averaged value is
-/// what is compared with the critical gradient i_c = (Gs − 1)/(1 + e) (or (γsat − γw)/γw).
+/// what is compared with the critical gradient i_c = (Gs − 1)/(1 + e) (or (γsat − γw)/γw) (Terzaghi, "Theoretical Soil
+/// Mechanics", 1943: the flotation gradient). Beside it each station carries the gradient of the single element row
+/// at the exit, ∇h·n of the boundary triangle at the station, so a reviewer sees how much the averaging matters.
+/// The default depth d = 0.5 m is set by the section validator and stated in <see cref="ExitResult.Method"/>.
 /// </summary>
 public static class ExitGradientCalculator
 {
@@ -31,7 +34,9 @@ public static class ExitGradientCalculator
                 double? below = sampler.Head(p + d * inward);
                 if (top is null || below is null) continue;
                 double gradient = (below.Value - top.Value) / d;
-                points.Add((stationOf.Of(p), new ExitProfilePoint(p.X, p.Y, gradient), sampler.Field.Mesh.Zones[e.Triangle]));
+                var (gx, gy) = sampler.Field.GradientAt(e.Triangle, p);
+                double row = gx * inward.X + gy * inward.Y;
+                points.Add((stationOf.Of(p), new ExitProfilePoint(p.X, p.Y, gradient, row), sampler.Field.Mesh.Zones[e.Triangle]));
             }
         }
         if (points.Count == 0)
@@ -41,6 +46,7 @@ public static class ExitGradientCalculator
         }
         points.Sort((u, v) => u.S.CompareTo(v.S));
         var max = points.MaxBy(p => p.P.Gradient);
+        var maxRow = points.MaxBy(p => p.P.RowGradient);
         var soil = section.Soils[section.Zones[max.Zone].Soil];
         double? critical = CriticalGradient(soil, section.WaterUnitWeight);
         if (critical is null)
@@ -49,9 +55,9 @@ public static class ExitGradientCalculator
         bool? pass = factor is { } f ? f >= exit.RequiredFactor : null;
         WarnIfSingular(section, new Point2(max.P.X, max.P.Y), d, warnings);
         string method = FormattableString.Invariant(
-            $"upward gradient (h(p + d·n) − h(p))/d averaged over d = {d} m below the exit surface, n the inward normal");
+            $"upward gradient (h(p + d·n) − h(p))/d averaged over d = {d} m below the exit surface (default 0.5 m), n the inward normal; rowGradient: ∇h·n of the single element row at the exit (order {sampler.Field.Order} elements)");
         return new ExitResult(max.P.Gradient, max.P.X, max.P.Y, critical, factor, exit.RequiredFactor, pass, d, method,
-            points.Select(p => p.P).ToList());
+            points.Select(p => p.P).ToList(), max.P.RowGradient, maxRow.P.RowGradient, maxRow.P.X, maxRow.P.Y);
     }
 
     /// <summary>Critical (flotation) gradient of a soil, dimensionless; null without the data.</summary>
@@ -64,9 +70,10 @@ public static class ExitGradientCalculator
 
     private static void WarnIfSingular(SectionModel section, Point2 at, double depth, List<string> warnings)
     {
+        // A cutoff's face at the ground is not singular (the wall meets the surface at a right angle), but its tip is.
         foreach (var c in section.Cutoffs)
-            if (c.Top.DistanceTo(at) <= Math.Max(depth, 1e-3 * section.Extent))
-                warnings.Add($"Exit gradient: the maximum sits at the face of cutoff '{c.Name}', a singular point; the value is the average over the stated depth, not a point value.");
+            if (c.Tip.DistanceTo(at) <= depth * 1.5)
+                warnings.Add($"Exit gradient: the maximum sits by the tip of cutoff '{c.Name}', a singular point; the value is the average over the stated depth, not a point value.");
         foreach (var s in section.Structures)
             foreach (var end in new[] { s.Base[0], s.Base[^1] })
                 if (end.DistanceTo(at) <= Math.Max(depth, 1e-3 * section.Extent) && section.Cutoffs.All(c => c.Top.DistanceTo(end) > 1e-6 * section.Extent))

@@ -4,7 +4,7 @@ using Seepage.Core.Geometry;
 namespace Seepage.Core.Results;
 
 /// <summary>Finds the triangle under a point (uniform bucket grid over triangle bounding boxes) and interpolates
-/// the P1 head there.</summary>
+/// head there (linear or quadratic, element by element).</summary>
 public sealed class FieldSampler
 {
     private readonly HeadField _field;
@@ -64,24 +64,14 @@ public sealed class FieldSampler
     }
 
     /// <summary>Barycentric coordinates of p in triangle t.</summary>
-    public (double, double, double) Barycentric(int t, Point2 p)
-    {
-        var m = _field.Mesh; var tri = m.Triangles;
-        int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-        double x0 = m.X[a], y0 = m.Y[a], x1 = m.X[b], y1 = m.Y[b], x2 = m.X[c], y2 = m.Y[c];
-        double d = (x1 - x0) * (y2 - y0) - (x2 - x0) * (y1 - y0);
-        double l1 = ((p.X - x0) * (y2 - y0) - (x2 - x0) * (p.Y - y0)) / d;
-        double l2 = ((x1 - x0) * (p.Y - y0) - (p.X - x0) * (y1 - y0)) / d;
-        return (1 - l1 - l2, l1, l2);
-    }
+    public (double, double, double) Barycentric(int t, Point2 p) => _field.Barycentric(t, p);
 
-    /// <summary>Total head (m) at p, or null outside the mesh.</summary>
+    /// <summary>Total head (m) at p, or null outside the mesh (P1 or P2, element-wise).</summary>
     public double? Head(Point2 p)
     {
         int t = Locate(p);
         if (t < 0) return null;
         var (l0, l1, l2) = Barycentric(t, p);
-        var tri = _field.Mesh.Triangles; var h = _field.Heads;
-        return l0 * h[tri[3 * t]] + l1 * h[tri[3 * t + 1]] + l2 * h[tri[3 * t + 2]];
+        return _field.Value(t, l0, l1, l2);
     }
 }

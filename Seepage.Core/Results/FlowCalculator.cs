@@ -11,7 +11,7 @@ namespace Seepage.Core.Results;
 public static class FlowCalculator
 {
     public static (FlowSummary Summary, double[] Reactions) Compute(LinearSystem system, double[] heads, MeshBoundary boundary,
-        SectionModel section, double tolerance)
+        SectionModel section, double tolerance, QuadraticDofs? quadratic = null)
     {
         var reactions = new double[heads.Length];
         system.Full.Multiply(heads, reactions);
@@ -33,7 +33,7 @@ public static class FlowCalculator
         double Sum(List<BoundaryEdge> edges)
         {
             double s = 0;
-            foreach (int n in MeshBoundary.NodesOf(edges))
+            foreach (int n in MeshBoundary.NodesOf(edges, quadratic))
                 if (!claimed[n]) { claimed[n] = true; s += reactions[n]; }
             return s;
         }

@@ -9,6 +9,8 @@ namespace Seepage.Core.Sections;
 public sealed record SectionDocument
 {
     public string? Title { get; init; }
+    /// <summary>Free text describing the scenario (optional).</summary>
+    public string? Description { get; init; }
     /// <summary>Unit of kx, ky: "m/s" (default), "cm/s", "m/day" or "ft/day".</summary>
     public string? ConductivityUnit { get; init; }
     /// <summary>Unit weight of water, kN/m³. Default 9.81.</summary>
@@ -24,6 +26,12 @@ public sealed record SectionDocument
     public MeshDocument? Mesh { get; init; }
     /// <summary>Length of the structure along its axis, metres (optional; gives total flow).</summary>
     public double? StructureLength { get; init; }
+    /// <summary>Flow gauges: polylines across the section whose crossing flow (m³/s per m) is reported (optional).</summary>
+    public List<GaugeDocument>? Gauges { get; init; }
+    /// <summary>When true, one extra solve on the section with its lateral boundaries pushed out by half their
+    /// distance from the structures tells whether the truncation changes the flow by more than 1% (default false;
+    /// done automatically for models of fewer than 20,000 triangles).</summary>
+    public bool? TruncationCheck { get; init; }
 
     [JsonExtensionData]
     public Dictionary<string, object>? Extra { get; init; }
@@ -100,10 +108,25 @@ public sealed record HeaveCheckDocument
     public double? RequiredFactor { get; init; }
 }
 
-/// <summary>Mesh request: target edge length in m (default: the domain's larger extent / 60, at most 2 m),
+/// <summary>Mesh request: target edge length in m (default: the domain's larger extent / 100, at most a third of the shortest cutoff),
 /// minimum angle in degrees (default 28).</summary>
 public sealed record MeshDocument
 {
     public double? Size { get; init; }
     public double? MinAngle { get; init; }
+    /// <summary>Polynomial order of the elements: 1 (linear triangles, default) or 2 (quadratic triangles with
+    /// mid-edge nodes, for accurate gradients).</summary>
+    public int? Order { get; init; }
+    /// <summary>When true, the section is also solved on two uniform refinements of the mesh (each triangle split
+    /// into four) and the flow, the maximum exit gradient and the uplift force are reported with their observed
+    /// order and a Richardson estimate of the error. Default false.</summary>
+    public bool? ConvergenceCheck { get; init; }
+}
+
+/// <summary>A flow gauge: a polyline across the section (list of [x, y], m); the flow crossing it is reported in
+/// m³/s per m, positive along the normal that points 90° counter-clockwise from the walking direction.</summary>
+public sealed record GaugeDocument
+{
+    public string? Name { get; init; }
+    public List<double[]>? Along { get; init; }
 }

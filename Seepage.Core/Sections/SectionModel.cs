@@ -32,6 +32,13 @@ public sealed record SectionModel(
         }
     }
 
+    /// <summary>Flow gauges (polylines across the section, m). Empty when none are given.</summary>
+    public IReadOnlyList<Gauge> Gauges { get; init; } = [];
+
+    /// <summary>Whether to check the truncation of the lateral boundaries by one extra solve on a wider section.
+    /// Null means "automatically for small models".</summary>
+    public bool? TruncationCheck { get; init; }
+
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }
@@ -63,4 +70,14 @@ public sealed record DrainBoundary(string Name, IReadOnlyList<Point2> Along);
 public sealed record ExitCheck(IReadOnlyList<Point2> Along, double Depth, double RequiredFactor, bool AlongGiven);
 
 /// <summary>Mesh request: target edge length (m) and smallest angle (degrees).</summary>
-public sealed record MeshSettings(double Size, double MinAngle);
+public sealed record MeshSettings(double Size, double MinAngle)
+{
+    /// <summary>Element order: 1 (linear, default) or 2 (quadratic).</summary>
+    public int Order { get; init; } = 1;
+
+    /// <summary>Whether to solve on two uniform refinements and report the convergence of the key figures.</summary>
+    public bool ConvergenceCheck { get; init; }
+}
+
+/// <summary>A flow gauge: a named polyline (m) across the section.</summary>
+public sealed record Gauge(string Name, IReadOnlyList<Point2> Along);

@@ -68,7 +68,9 @@ public static class SectionValidator
         double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? 1.5;
         if (!double.IsFinite(heaveFactor) || heaveFactor <= 0)
             problems.Add(new("/heaveCheck/requiredFactor", "must be a positive number."));
-        var mesh = ReadMesh(doc.Mesh, zones, domain, problems);
+        var mesh = ReadMesh(doc.Mesh, zones, cutoffs, domain, problems);
+
+        var gauges = ReadGauges(doc.Gauges, reader, problems);
 
         if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
             problems.Add(new("/structureLength", "must be a positive length in metres."));
@@ -77,7 +79,7 @@ public static class SectionValidator
             return new ValidationOutcome(null, problems);
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings);
+            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck };
         return new ValidationOutcome(model, problems);
     }
 
@@ -131,11 +133,7 @@ public static class SectionValidator
                 problems.Add(new($"{at}/outline", "intersects itself (or has zero area); an outline must be a simple polygon."));
                 continue;
             }
-            if (PolygonMath.SignedArea(ring) < 0)
-            {
-                ring.Reverse();
-                warnings.Add($"Zone {i} outline was clockwise and has been reversed.");
-            }
+            if (PolygonMath.SignedArea(ring) < 0) ring.Reverse(); // either orientation is accepted; stored counter-clockwise
             zones.Add(new Zone(Math.Max(soil, 0), ring, z.Size));
         }
         return zones;
@@ -199,11 +197,16 @@ public static class SectionValidator
         return along is null ? null : new ExitCheck(along, depth, required, doc?.Along is not null);
     }
 
-    private static MeshSettings? ReadMesh(MeshDocument? doc, List<Zone>? zones, Domain? domain, List<SectionProblem> problems)
+    /// <summary>Default mesh size, m: a hundredth of the domain's extent, and at most a third of the shortest cutoff.</summary>
+    public static double DefaultMeshSize(double extent, IEnumerable<Cutoff> cutoffs) =>
+        Math.Min(extent / 100, cutoffs.Select(c => c.Length / 3).DefaultIfEmpty(double.PositiveInfinity).Min());
+
+    private static MeshSettings? ReadMesh(MeshDocument? doc, List<Zone>? zones, List<Cutoff> cutoffs, Domain? domain,
+        List<SectionProblem> problems)
     {
         if (zones is null || zones.Count == 0) return null;
         double extent = Extent(zones);
-        double size = doc?.Size ?? Math.Min(2.0, extent / 60);
+        double size = doc?.Size ?? DefaultMeshSize(extent, cutoffs);
         double minAngle = doc?.MinAngle ?? 28;
         if (!double.IsFinite(size) || size <= 0) { problems.Add(new("/mesh/size", "must be a positive edge length in metres.")); return null; }
         if (!double.IsFinite(minAngle) || minAngle < 10 || minAngle > 33)
@@ -215,7 +218,22 @@ public static class SectionValidator
                 problems.Add(new("/mesh/size", FormattableString.Invariant(
                     $"{size} m gives about {estimate:E2} triangles; at most {MaxEstimatedTriangles:E1} are accepted.")));
         }
-        return new MeshSettings(size, minAngle);
+        int order = doc?.Order ?? 1;
+        if (order is not (1 or 2)) problems.Add(new("/mesh/order", "must be 1 (linear triangles) or 2 (quadratic triangles)."));
+        return new MeshSettings(size, minAngle) { Order = order, ConvergenceCheck = doc?.ConvergenceCheck ?? false };
+    }
+
+    private static List<Gauge> ReadGauges(List<GaugeDocument>? docs, PointReader reader, List<SectionProblem> problems)
+    {
+        var gauges = new List<Gauge>();
+        if (docs is null) return gauges;
+        for (int i = 0; i < docs.Count; i++)
+        {
+            if (docs[i] is not { } g) { problems.Add(new($"/gauges/{i}", "must be an object.")); continue; }
+            if (reader.Polyline(g.Along, $"/gauges/{i}/along", 2, "the gauge polyline") is { } line)
+                gauges.Add(new Gauge(g.Name ?? $"gauge {i + 1}", line));
+        }
+        return gauges;
     }
 
     private static double Extent(IEnumerable<Zone> zones)

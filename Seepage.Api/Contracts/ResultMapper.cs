@@ -1,0 +1,68 @@
+using Seepage.Core;
+using Seepage.Core.Geometry;
+using Seepage.Core.Results;
+
+namespace Seepage.Api.Contracts;
+
+/// <summary>The one place where Core results become response contracts.</summary>
+public static class ResultMapper
+{
+    public static AnalysisResultDto ToDto(string id, DateTimeOffset createdAt, AnalysisResult r)
+    {
+        var f = r.Flow;
+        var flow = new FlowDto(f.PerMetre, "m³/s per m", f.Inflow, f.Outflow, f.Balance, f.PerMetre * 86_400, f.PerMetre * 60_000,
+            f.Boundaries.Select(b => new BoundaryFlowDto(b.Name, b.Kind, b.Flow)).ToList(),
+            r.Section.StructureLength, f.PerMetre * r.Section.StructureLength, f.PerMetre * r.Section.StructureLength * 86_400);
+        var uplift = r.Uplift.Select(u => new UpliftDto(u.Structure,
+            u.Stations.Select(s => new UpliftStationDto(s.X, s.Y, s.Head, s.Pressure)).ToList(),
+            u.Force, u.CentroidX, u.MomentAboutDownstreamToe, u.DownstreamToeX,
+            u.Junctions.Select(j => new UpliftJunctionDto(j.Cutoff, j.X, j.UpstreamFacePercent, j.DownstreamFacePercent)).ToList())).ToList();
+        ExitDto? exit = r.Exit is { } e
+            ? new ExitDto(e.MaxGradient, [e.AtX, e.AtY], e.CriticalGradient, e.Factor, e.RequiredFactor, e.Pass, e.Depth, e.Method,
+                e.Profile.Select(p => new ExitProfilePointDto(p.X, p.Gradient, p.RowGradient)).ToList(),
+                e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY])
+            : null;
+        var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass,
+            h.EffectiveWeight, h.UpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
+        CreepDto? creep = r.Creep is { } c ? new CreepDto(Creep(c.Lane), Creep(c.Bligh)) : null;
+        var q = r.Mesh.Quality;
+        var mesh = new MeshStatsDto(q.Nodes, q.Triangles, q.MinAngle, q.MaxAngle, q.MinAngleHistogram, q.Seconds);
+        var s = r.Solver;
+        var solver = new SolverStatsDto(s.Method, s.Levels, s.OperatorComplexity, s.Unknowns, s.Iterations, s.Residual, s.Seconds);
+        return new AnalysisResultDto(id, r.Section.Title, createdAt, flow, uplift, exit, heave, creep, mesh, solver,
+            r.Warnings, AnalysisResult.Caution, r.Seconds, Independent(r.IndependentVariables),
+            r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length)).ToList(),
+            r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
+                new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
+            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null);
+    }
+
+    public static FieldDto ToFieldDto(string id, AnalysisResult r)
+    {
+        var m = r.Mesh;
+        var nodes = new double[m.NodeCount][];
+        for (int i = 0; i < m.NodeCount; i++) nodes[i] = [Math.Round(m.X[i], 6), Math.Round(m.Y[i], 6)];
+        var triangles = new int[m.TriangleCount][];
+        for (int t = 0; t < m.TriangleCount; t++) triangles[t] = [m.Triangles[3 * t], m.Triangles[3 * t + 1], m.Triangles[3 * t + 2]];
+        var net = r.FlowNet;
+        var equipotentials = net?.Equipotentials.Select(e => new EquipotentialDto(e.Head, e.Paths.Select(Line).ToList())).ToList() ?? [];
+        var flowLines = net?.FlowLines.SelectMany(l => l.Paths.Select(p => new FlowLineDto(l.Fraction, Line(p)))).ToList() ?? [];
+        var counts = new FlowNetDto(net?.FlowChannels ?? 0, net?.HeadDrops ?? 0, net?.ShapeFactor ?? 0, net?.HeadDifference ?? 0);
+        var walls = r.Section.Cutoffs.Select(c => Line([c.Top, c.Tip]))
+            .Concat(r.Section.Structures.Select(s => Line(s.Base))).ToList();
+        return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
+            equipotentials, flowLines, counts, walls);
+    }
+
+    private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :
+        new(v.Structure, v.FloorLength, v.HeadDifference,
+            v.Piles.Select(p => new KeyPointPileDto(p.Cutoff, p.Position, p.X, p.Depth, Key(p.E), Key(p.D), Key(p.C))).ToList(),
+            v.ExitGradient, v.FeExitGradient, v.FeRowExitGradient, v.CorrectionsApplied, v.CorrectionsNotApplied, v.Notes, v.Source);
+
+    private static KeyPointDto Key(KeyPoint k) => new(k.Basic, k.Correction, k.Corrected, k.Fe, k.Difference);
+
+    private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source);
+
+    private static double[][] Line(IReadOnlyList<Point2> points) =>
+        points.Select(p => new[] { Math.Round(p.X, 5), Math.Round(p.Y, 5) }).ToArray();
+}

@@ -1,0 +1,80 @@
+using System.Diagnostics;
+using Seepage.Core.Fem;
+using Seepage.Core.Meshing;
+using Seepage.Core.Results;
+using Seepage.Core.Sections;
+using Seepage.Core.Solvers;
+
+namespace Seepage.Core;
+
+/// <summary>
+/// Runs the pipeline in order: section → planar graph → mesh → K and fixed heads → condensed SPD system
+/// K_FF h_F = −K_FD h_D → solve → head field → figures (flow, uplift, exit gradient, heave, creep, flow net).
+/// Each stage returns plain data; nothing reaches back.
+/// </summary>
+public static class Analysis
+{
+    public static AnalysisResult Run(SectionModel section, AnalysisOptions? options = null, CancellationToken cancellation = default)
+    {
+        options ??= new AnalysisOptions();
+        var clock = Stopwatch.StartNew();
+        var warnings = new List<string>(section.Warnings);
+
+        var mesh = MakeMesh(section, warnings, cancellation);
+        var solution = FieldSolver.Solve(section, mesh, section.Mesh.Order, options.Solver, cancellation);
+        var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
+        double tolerance = 1e-6 * section.Extent;
+
+        var (flow, _) = FlowCalculator.Compute(solution.System, field.Heads, boundary, section, tolerance, solution.Quadratic);
+        var sampler = new FieldSampler(field);
+        var uplift = UpliftCalculator.Compute(section, field, boundary, tolerance);
+        var exit = ExitGradientCalculator.Compute(section, sampler, boundary, tolerance, warnings);
+        var heave = HeaveCalculator.Compute(section, sampler, warnings);
+        var exitSoil = ExitSoil(section, sampler, exit);
+        var creep = CreepCalculator.Compute(section, exitSoil);
+        var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
+        var gauges = GaugeCalculator.Compute(section, sampler);
+        var convergence = section.Mesh.ConvergenceCheck
+            ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
+        var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
+            ? TruncationCheck.Run(section, flow.PerMetre, section.Mesh.Order, s => MakeMesh(s, [], cancellation), options.Solver, warnings, cancellation)
+            : null;
+
+        FlowNet? net = null;
+        if (options.FlowNet)
+        {
+            // The flow net is drawn from the vertex heads (the P1 part of a quadratic field).
+            var psi = StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
+            double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
+            if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
+            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops);
+        }
+        if (Math.Abs(flow.Balance) > 1e-6)
+            warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
+        return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
+            clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
+    }
+
+    /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>
+    public static Mesh MakeMesh(SectionModel section, List<string> warnings, CancellationToken cancellation = default)
+    {
+        // Strong grading at singular points (tips, corners): the flow error there dominates otherwise.
+        var options = new MeshOptions { Size = section.Mesh.Size, MinAngle = section.Mesh.MinAngle, SingularRefinement = 0.02 };
+        var graph = SectionGraphBuilder.Build(section, options);
+        var mesh = QualityMesher.Build(graph, options, cancellation);
+        warnings.AddRange(mesh.Warnings);
+        return mesh;
+    }
+
+    // The soil at the exit (or, without an exit check, of the first zone): its creep class and conductivity
+    // serve the hand checks and the flow-net reference.
+    private static Soil ExitSoil(SectionModel section, FieldSampler sampler, ExitResult? exit)
+    {
+        if (exit is not null)
+        {
+            int t = sampler.Locate(new Seepage.Core.Geometry.Point2(exit.AtX, exit.AtY - 1e-6 * section.Extent));
+            if (t >= 0) return section.Soils[section.Zones[sampler.Field.Mesh.Zones[t]].Soil];
+        }
+        return section.Soils[section.Zones[0].Soil];
+    }
+}

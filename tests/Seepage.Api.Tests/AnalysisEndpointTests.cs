@@ -1,0 +1,124 @@
+using System.Net;
+using System.Net.Http.Json;
+using System.Text;
+using System.Text.Json;
+using System.Text.Json.Nodes;
+
+namespace Seepage.Api.Tests;
+
+public class AnalysisEndpointTests
+{
+    private static StringContent Json(string json) => new(json, Encoding.UTF8, "application/json");
+
+    private static string DesignExample() => File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "design-example.section.json"));
+
+    private static async Task<JsonElement> ReadJson(HttpResponseMessage response) =>
+        JsonDocument.Parse(await response.Content.ReadAsStringAsync()).RootElement;
+
+    [Fact]
+    public async Task Post_DesignExample_CreatesAndRoundTrips()
+    {
+        using var factory = new SeepageFactory();
+        var client = factory.CreateClient();
+        var post = await client.PostAsync("/api/v1/analyses", Json(DesignExample()));
+        Assert.Equal(HttpStatusCode.Created, post.StatusCode);
+        var created = await ReadJson(post);
+        string id = created.GetProperty("id").GetString()!;
+        Assert.Equal($"/api/v1/analyses/{id}", post.Headers.Location!.OriginalString);
+        double q = created.GetProperty("flow").GetProperty("perMetre").GetDouble();
+        Assert.True(q > 0);
+        Assert.Contains("licensed geotechnical engineer", created.GetProperty("caution").GetString());
+
+        var get = await client.GetAsync($"/api/v1/analyses/{id}");
+        Assert.Equal(HttpStatusCode.OK, get.StatusCode);
+        Assert.Equal(q, (await ReadJson(get)).GetProperty("flow").GetProperty("perMetre").GetDouble());
+
+        var field = await ReadJson(await client.GetAsync($"/api/v1/analyses/{id}/field"));
+        Assert.Equal(created.GetProperty("mesh").GetProperty("nodes").GetInt32(), field.GetProperty("nodes").GetArrayLength());
+        Assert.True(field.GetProperty("equipotentials").GetArrayLength() > 0);
+        Assert.True(field.GetProperty("flowLines").GetArrayLength() > 0);
+    }
+
+    [Fact]
+    public async Task Get_AfterRestartOnSameDatabase_StillThere()
+    {
+        string id, path;
+        using (var first = new SeepageFactory())
+        {
+            path = first.DatabasePath;
+            var post = await first.CreateClient().PostAsync("/api/v1/analyses", Json(DesignExample()));
+            id = (await ReadJson(post)).GetProperty("id").GetString()!;
+        }
+        using var second = new SeepageFactory(path);
+        var get = await second.CreateClient().GetAsync($"/api/v1/analyses/{id}");
+        Assert.Equal(HttpStatusCode.OK, get.StatusCode);
+    }
+
+    [Fact]
+    public async Task Get_UnknownId_ProblemDetails404()
+    {
+        using var factory = new SeepageFactory();
+        var response = await factory.CreateClient().GetAsync("/api/v1/analyses/nope");
+        Assert.Equal(HttpStatusCode.NotFound, response.StatusCode);
+        Assert.Equal("application/problem+json", response.Content.Headers.ContentType!.MediaType);
+    }
+
+    [Theory]
+    [InlineData("{ \"soils\": [", "/soils/0")]                                // malformed JSON: where the reader stopped
+    [InlineData("{ \"soils\": [ { \"id\": \"a\", \"kx\": \"fast\" } ] }", "/soils/0/kx")] // wrong type
+    [InlineData("", "")]                                                      // empty body
+    public async Task Post_UnreadableBody_400WithPointer(string body, string pointer)
+    {
+        using var factory = new SeepageFactory();
+        var response = await factory.CreateClient().PostAsync("/api/v1/analyses", Json(body));
+        await AssertProblemAt(response, pointer);
+    }
+
+    [Theory]
+    [InlineData("/soils/0/kx", "/soils/0/kx", -1.0)]
+    [InlineData("/zones/1/soil", "/zones/1/soil", "granite")]
+    [InlineData("/heads/0/along", "/heads/0/along", "offBoundary")]
+    [InlineData("/cutoffs/0/tip", "/cutoffs/0/tip", "closesPath")]
+    public async Task Post_InvalidSection_400NamingTheField(string _, string pointer, object change)
+    {
+        var doc = JsonNode.Parse(DesignExample())!;
+        switch (pointer)
+        {
+            case "/soils/0/kx": doc["soils"]![0]!["kx"] = (double)change; break;
+            case "/zones/1/soil": doc["zones"]![1]!["soil"] = (string)change; break;
+            case "/heads/0/along": doc["heads"]![0]!["along"] = JsonNode.Parse("[[-80,-3],[-12,-3]]"); break;
+            case "/cutoffs/0/tip": doc["cutoffs"]![0]!["tip"] = JsonNode.Parse("[-12,-25]"); break;
+        }
+        using var factory = new SeepageFactory();
+        var response = await factory.CreateClient().PostAsync("/api/v1/analyses", Json(doc.ToJsonString()));
+        await AssertProblemAt(response, pointer);
+    }
+
+    [Fact]
+    public async Task Post_OversizeBody_413()
+    {
+        using var factory = new SeepageFactory();
+        string big = "{\"title\":\"" + new string('x', 5 * 1024 * 1024) + "\"}";
+        var response = await factory.CreateClient().PostAsync("/api/v1/analyses", Json(big));
+        Assert.Equal(HttpStatusCode.RequestEntityTooLarge, response.StatusCode);
+        Assert.Equal("application/problem+json", response.Content.Headers.ContentType!.MediaType);
+    }
+
+    [Fact]
+    public async Task Validate_DesignExample_200()
+    {
+        using var factory = new SeepageFactory();
+        var response = await factory.CreateClient().PostAsync("/api/v1/sections/validate", Json(DesignExample()));
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        Assert.True((await ReadJson(response)).GetProperty("valid").GetBoolean());
+    }
+
+    private static async Task AssertProblemAt(HttpResponseMessage response, string pointer)
+    {
+        string text = await response.Content.ReadAsStringAsync();
+        Assert.True(response.StatusCode == HttpStatusCode.BadRequest, $"{response.StatusCode}: {text}");
+        Assert.Equal("application/problem+json", response.Content.Headers.ContentType!.MediaType);
+        var errors = JsonDocument.Parse(text).RootElement.GetProperty("errors");
+        Assert.True(errors.TryGetProperty(pointer, out _), $"no error under '{pointer}': {text}");
+    }
+}
