@@ -4,13 +4,15 @@ using Seepage.Core.Solvers;
 
 namespace Seepage.Benchmarks;
 
-/// <summary>Solver benchmark: `solve [--sizes 100000,250000,1000000] [--repeats 3] [--baseline-repeats 3]`.
+/// <summary>Solver benchmark: `solve [--sizes 100000,250000,1000000] [--repeats 3] [--baseline-repeats 3]
+/// [--source generator|pipeline] [--verbose]`.
 /// Prints per size
 /// <c>solve unknowns=N seconds=median iterations=n baselineSeconds=median ratio=baseline/ours</c>,
 /// seconds = AMG setup + PCG solve to ‖r‖₂/‖b‖₂ ≤ 1e-8; the baseline (MathNet BiCgStab + MILU0, same
 /// matrix, rhs and residual; if its default modified MILU0 breaks down, the unmodified variant, ILU(0), is
 /// timed from a slightly perturbed start and a note goes to stderr) runs up to 250k unknowns only (nan above). Then the process peak working set.
-/// The matrices come from <see cref="LayeredSectionGenerator"/> (a stand-in for the real pipeline).</summary>
+/// The matrices come from <see cref="LayeredSectionGenerator"/> (a stand-in for the real pipeline), or with
+/// <c>--source pipeline [--section file]</c> from the real mesher and assembly (<see cref="PipelineSystem"/>).</summary>
 public static class SolveBenchmark
 {
     private const double Tolerance = 1e-8;
@@ -26,13 +28,14 @@ public static class SolveBenchmark
         int repeats = int.Parse(Option(args, "--repeats", "3"), CultureInfo.InvariantCulture);
         int baselineRepeats = int.Parse(Option(args, "--baseline-repeats", "3"), CultureInfo.InvariantCulture);
         bool verbose = args.Contains("--verbose");
+        string source = Option(args, "--source", "generator");
+        string sectionPath = Option(args, "--section", "/work/shared/design-example.section.json");
         var inv = CultureInfo.InvariantCulture;
         int largest = sizes.Max();
         WarmUp();
         foreach (int size in sizes)
         {
-            var problem = new LayeredSectionGenerator(size);
-            var a = problem.Matrix; var b = problem.Rhs;
+            var (a, b) = source == "pipeline" ? PipelineSystem.Build(size, sectionPath) : Generated(size);
             var times = new List<double>(); SolveReport? report = null;
             for (int k = 0; k < repeats; k++)
             {
@@ -69,6 +72,12 @@ public static class SolveBenchmark
             if (size == largest)
                 Console.WriteLine(string.Create(inv, $"solve peakWorkingSetMB={Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:F0} (process peak after unknowns={a.Size})"));
         }
+    }
+
+    private static (CsrMatrix, double[]) Generated(int size)
+    {
+        var problem = new LayeredSectionGenerator(size);
+        return (problem.Matrix, problem.Rhs);
     }
 
     /// <summary>One small solve of each kind first, so that JIT compilation is not timed (a service is warm).</summary>
