@@ -11,6 +11,13 @@ if [ ! -x /usr/bin/chromium ]; then
     || { echo "Could not install Chromium; the browser tests will fail." >&2; }
 fi
 
+if ! ls /usr/share/fonts/truetype/dejavu/DejaVuSans.ttf /usr/share/fonts/truetype/liberation/LiberationSans-Regular.ttf >/dev/null 2>&1; then
+  echo "Installing a TrueType font for the PDF reports (Debian package fonts-dejavu-core)..."
+  SUDO=""; [ "$(id -u)" -ne 0 ] && SUDO="sudo"
+  $SUDO apt-get update -qq && DEBIAN_FRONTEND=noninteractive $SUDO apt-get install -y -qq fonts-dejavu-core >/dev/null \
+    || { echo "Could not install fonts-dejavu-core; the PDF report tests will fail." >&2; }
+fi
+
 log=$(mktemp)
 dotnet test Seepage.sln -c Release 2>&1 | tee "$log"
 status=${PIPESTATUS[0]}

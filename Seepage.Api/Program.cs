@@ -13,6 +13,9 @@ app.UseSeepageOpenApi();
 app.MapAnalysisEndpoints();
 app.MapSectionEndpoints();
 app.MapExampleEndpoints();
+app.MapImportEndpoints();
+app.MapStudyEndpoints();
+app.MapReportEndpoints();
 app.LogPageAddress();
 app.Run();
 

@@ -15,6 +15,8 @@ public static class ServiceSetup
         string path = configuration[DatabasePathKey] ?? Path.Combine(environment.ContentRootPath, "data", "seepage.db");
         services.AddSingleton(new AnalysisStore(path));
         services.AddSingleton<AnalysisService>();
+        services.AddSingleton(new StudyStore(path));
+        services.AddSingleton<StudyService>();
         services.AddSingleton<ExampleCatalog>();
         services.AddProblemDetails();
         services.ConfigureHttpJsonOptions(o => o.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);

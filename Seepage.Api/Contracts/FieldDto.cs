@@ -3,7 +3,8 @@ namespace Seepage.Api.Contracts;
 /// <summary>
 /// Field data for drawing an analysis (served apart from the summary): node coordinates (m), triangles
 /// (node indices, counter-clockwise), zone index per triangle, total head per node (m), equipotentials at
-/// equal head drops and flow lines bounding equal-flow channels (polylines of [x, y] in m).
+/// equal head drops and flow lines bounding equal-flow channels (polylines of [x, y] in m); per triangle, the
+/// head gradient [∂h/∂x, ∂h/∂y] (dimensionless) and the Darcy velocity [vx, vy] = −K∇h (m/s) at its centroid.
 /// </summary>
 public sealed record FieldDto(
     string Id,
@@ -14,7 +15,9 @@ public sealed record FieldDto(
     IReadOnlyList<EquipotentialDto> Equipotentials,
     IReadOnlyList<FlowLineDto> FlowLines,
     FlowNetDto FlowNet,
-    IReadOnlyList<double[][]> Walls);
+    IReadOnlyList<double[][]> Walls,
+    double[][] Gradients,
+    double[][] Velocities);
 
 /// <summary>One equipotential: its total head in m and the polylines where the field takes it.</summary>
 public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Paths);

@@ -50,8 +50,17 @@ public static class ResultMapper
         var counts = new FlowNetDto(net?.FlowChannels ?? 0, net?.HeadDrops ?? 0, net?.ShapeFactor ?? 0, net?.HeadDifference ?? 0);
         var walls = r.Section.Cutoffs.Select(c => Line([c.Top, c.Tip]))
             .Concat(r.Section.Structures.Select(s => Line(s.Base))).ToList();
+        var gradients = new double[m.TriangleCount][];
+        var velocities = new double[m.TriangleCount][];
+        for (int t = 0; t < m.TriangleCount; t++)
+        {
+            var (gx, gy) = r.Field.Gradient(t);
+            var (vx, vy) = r.Field.Velocity(t);
+            gradients[t] = [Significant(gx), Significant(gy)];
+            velocities[t] = [Significant(vx), Significant(vy)];
+        }
         return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
-            equipotentials, flowLines, counts, walls);
+            equipotentials, flowLines, counts, walls, gradients, velocities);
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :
@@ -60,6 +69,14 @@ public static class ResultMapper
             v.ExitGradient, v.FeExitGradient, v.FeRowExitGradient, v.CorrectionsApplied, v.CorrectionsNotApplied, v.Notes, v.Source);
 
     private static KeyPointDto Key(KeyPoint k) => new(k.Basic, k.Correction, k.Corrected, k.Fe, k.Difference);
+
+    // Six significant figures keep the field document small without losing what a drawing needs.
+    private static double Significant(double v)
+    {
+        if (v == 0 || !double.IsFinite(v)) return 0;
+        int digits = 5 - (int)Math.Floor(Math.Log10(Math.Abs(v)));
+        return digits > 15 ? v : Math.Round(v, Math.Max(digits, 0));
+    }
 
     private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source);
 

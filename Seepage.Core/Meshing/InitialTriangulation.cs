@@ -87,6 +87,7 @@ internal static class InitialTriangulation
             }
             tri.Kill(t);
         }
+        tri.RepairVertexTriangles();
         if (kept == 0) throw new MeshingException("No triangle is reachable from a region seed; give at least one seed inside a closed outline.");
     }
 

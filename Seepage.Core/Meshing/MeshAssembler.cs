@@ -28,6 +28,7 @@ internal static class MeshAssembler
         var rank = new int[nodes];
         var x = new double[nodes]; var y = new double[nodes];
         for (int k = 0; k < nodes; k++) { rank[order[k]] = k; x[k] = px[order[k]]; y[k] = py[order[k]]; }
+        for (int v = 0; v < tri.VertexCount; v++) if (used[v] >= 0) used[v] = rank[used[v]]; // vertex → output node
         // Counting sort of triangles by their lowest node: stable, so deterministic.
         var count = new int[nodes + 1];
         var lowest = new int[triangles];
@@ -36,7 +37,7 @@ internal static class MeshAssembler
         for (int t = 0; t < tri.TriangleSlots; t++)
         {
             if (!tri.IsAlive(t)) continue;
-            int lo = Math.Min(rank[used[tri.V[3 * t]]], Math.Min(rank[used[tri.V[3 * t + 1]]], rank[used[tri.V[3 * t + 2]]]));
+            int lo = Math.Min(used[tri.V[3 * t]], Math.Min(used[tri.V[3 * t + 1]], used[tri.V[3 * t + 2]]));
             lowest[m] = lo; slot[m] = t; count[lo + 1]++; m++;
         }
         for (int k = 0; k < nodes; k++) count[k + 1] += count[k];
@@ -46,7 +47,7 @@ internal static class MeshAssembler
         {
             int at = count[lowest[j]]++;
             int t = slot[j];
-            int a = rank[used[tri.V[3 * t]]], b = rank[used[tri.V[3 * t + 1]]], c = rank[used[tri.V[3 * t + 2]]];
+            int a = used[tri.V[3 * t]], b = used[tri.V[3 * t + 1]], c = used[tri.V[3 * t + 2]];
             if (RobustPredicates.Orient(x[a], y[a], x[b], y[b], x[c], y[c]) <= 0)
                 throw new MeshingException($"Internal error: triangle at ({x[a]:G6}, {y[a]:G6}) is not counter-clockwise.");
             connectivity[3 * at] = a; connectivity[3 * at + 1] = b; connectivity[3 * at + 2] = c;

@@ -29,7 +29,12 @@ public static class QualityMesher
         var tri = InitialTriangulation.Build(clean, graph, warnings);
         cancellation.ThrowIfCancellationRequested();
         var size = new SizeField(graph, options);
+        size.AddZoneInterfaces(tri, clean);
         var rules = new TriangleRules(tri, clean, size, options);
+        double estimate = 0;
+        for (int t = 0; t < tri.TriangleSlots; t++)
+            if (tri.IsAlive(t)) estimate += size.EstimateTriangles(tri, t);
+        tri.Reserve((int)Math.Min(1.25 * estimate + 64, Math.Min(options.MaxTriangles + 64.0, 1 << 26)));
         new Refiner(tri, rules, clean, options, cancellation).Run();
         SlitSplitter.Split(tri, clean, warnings);
         return MeshAssembler.Assemble(tri, warnings, 0, clock);

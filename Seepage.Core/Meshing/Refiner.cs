@@ -109,11 +109,14 @@ internal sealed class Refiner
     private bool Encroaches(double px, double py, int a, int b) =>
         (_tri.X[a] - px) * (_tri.X[b] - px) + (_tri.Y[a] - py) * (_tri.Y[b] - py) < 0;
 
+    private long _splitSteps;
+
     private int SplitSegments()
     {
         int split = 0;
         while (_segments.TryDequeue(out var s))
         {
+            if ((++_splitSteps & 1023) == 0) _cancellation.ThrowIfCancellationRequested();
             int h = _tri.FindEdge(s.U, s.V);
             if (h < 0 || _tri.Mark[h] == 0) continue;
             if (!s.Force && !IsEncroached(h)) continue;

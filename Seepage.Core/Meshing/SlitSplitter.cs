@@ -48,8 +48,8 @@ internal static class SlitSplitter
                 if (triangles.Count == 0) continue;
                 int twin = tri.AddVertex(tri.X[x], tri.Y[x], tri.VertexSegment[x]);
                 foreach (int t in triangles) tri.V[3 * t + tri.IndexOf(t, x)] = twin;
-                tri.VertexTri[twin] = triangles[0];
             }
+            tri.RepairVertexTriangles();
         }
     }
 

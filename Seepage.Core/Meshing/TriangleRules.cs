@@ -15,7 +15,8 @@ namespace Seepage.Core.Meshing;
 /// refinement algorithms for triangular mesh generation", Comput. Geom. 22, 2002): triangles whose smallest
 /// angle is enclosed by two constrained edges at one vertex (the angle is the input angle), and triangles
 /// whose shortest edge joins two points on different segments at the same distance from the input vertex
-/// the segments share, when they meet there at under 60° (such an edge would be split for ever).
+/// the segments share, when they meet there at an angle φ under 60° (such an edge would be split for ever)
+/// and the triangle's smallest angle is at least φ.
 /// </remarks>
 internal sealed class TriangleRules
 {
@@ -55,10 +56,10 @@ internal sealed class TriangleRules
         // √3·R > h  ⇔  3·lab·lac·lbc > h²·area2²·... with R² = lab·lac·lbc / (4·area2²) ⇒ 3·lab·lac·lbc > 4·h²·area2²
         if (3 * lab * lac * lbc > 4 * h * h * area2 * area2) return true;
         if (area2 * area2 >= _sin2 * lmid * lmax) return false;
-        return !IsExempt(t, opposite);
+        return !IsExempt(t, opposite, area2 * area2 / (lmid * lmax));
     }
 
-    private bool IsExempt(int t, int opposite)
+    private bool IsExempt(int t, int opposite, double sinMin2)
     {
         var tri = _tri;
         // The smallest angle sits at the vertex opposite the shortest edge; it is an input angle when both
@@ -73,7 +74,10 @@ internal sealed class TriangleRules
         if (apex < 0) return false;
         double du = Dist(u, apex), dw = Dist(w, apex);
         if (Math.Abs(du - dw) > 1e-3 * Math.Max(du, dw)) return false;
-        return CosAt(apex, su, sw) > 0.5; // segments meet at less than 60°
+        // Segments meeting at less than 60°, and the triangle no worse than that input angle φ
+        // (sin² of its smallest angle ≥ sin² φ); a worse one is refined like any other.
+        double cos = CosAt(apex, su, sw);
+        return cos > 0.5 && sinMin2 >= (1 - cos * cos) * (1 - 1e-12);
     }
 
     private int SharedEndpoint(int s1, int s2)

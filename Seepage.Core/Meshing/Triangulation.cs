@@ -27,6 +27,26 @@ internal sealed partial class Triangulation
     private int[] _free = new int[16];
     private int _freeCount;
 
+    /// <summary>Grows the arrays once to hold about <paramref name="triangles"/> triangles and half as many
+    /// vertices, so that refinement does not reallocate (and leave garbage) as it goes.</summary>
+    public void Reserve(int triangles)
+    {
+        int nt = Math.Max(triangles, Zone.Length);
+        if (nt > Zone.Length)
+        {
+            Array.Resize(ref V, 3 * nt); Array.Resize(ref N, 3 * nt); Array.Resize(ref Mark, 3 * nt);
+            Array.Resize(ref Zone, nt);
+            GrowTriangleScratch(nt);
+        }
+        int nv = Math.Max(triangles / 2 + 16, X.Length);
+        if (nv > X.Length)
+        {
+            Array.Resize(ref X, nv); Array.Resize(ref Y, nv);
+            Array.Resize(ref VertexTri, nv); Array.Resize(ref VertexSegment, nv);
+            GrowVertexScratch(nv);
+        }
+    }
+
     public int AddVertex(double x, double y, int segment = -1)
     {
         if (VertexCount == X.Length)
@@ -76,6 +96,17 @@ internal sealed partial class Triangulation
 
     public bool IsAlive(int t) => V[3 * t] >= 0;
 
+    /// <summary>Points every vertex at one of its live triangles again (after triangles were removed
+    /// without replacement or vertices were renamed).</summary>
+    public void RepairVertexTriangles()
+    {
+        for (int t = 0; t < TriangleSlots; t++)
+        {
+            if (!IsAlive(t)) continue;
+            VertexTri[V[3 * t]] = t; VertexTri[V[3 * t + 1]] = t; VertexTri[V[3 * t + 2]] = t;
+        }
+    }
+
     /// <summary>Makes h1 and h2 twins (h2 may be −1: boundary).</summary>
     public void Link(int h1, int h2)
     {
@@ -119,8 +150,10 @@ internal sealed partial class Triangulation
         int t0 = VertexTri[a];
         if (t0 < 0 || !IsAlive(t0)) return -1;
         int t = t0;
+        int guard = 0;
         while (true)
         {
+            if (++guard > 200000) throw new MeshingException($"Corrupt adjacency around vertex {a} (internal error).");
             int n = N[3 * t + (IndexOf(t, a) + 2) % 3];
             if (n < 0) break;
             t = n / 3;
@@ -146,9 +179,11 @@ internal sealed partial class Triangulation
         fan.Clear();
         int t0 = VertexTri[v];
         int t = t0;
+        int guard = 0;
         // Turn clockwise to a boundary edge (or all the way round).
         while (true)
         {
+            if (++guard > 100000) throw new MeshingException($"Corrupt adjacency around vertex {v} (internal error).");
             int i = IndexOf(t, v);
             int n = N[3 * t + (i + 2) % 3];         // edge v -> V[i+1]; the clockwise neighbour
             if (n < 0) break;
@@ -160,6 +195,7 @@ internal sealed partial class Triangulation
         t = start;
         while (true)
         {
+            if (++guard > 200000) throw new MeshingException($"Corrupt adjacency around vertex {v} (internal error).");
             fan.Add(t);
             int n = N[3 * t + (IndexOf(t, v) + 1) % 3]; // edge V[i+2] -> v; the counter-clockwise neighbour
             if (n < 0) break;

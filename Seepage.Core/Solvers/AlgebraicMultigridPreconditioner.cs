@@ -7,10 +7,11 @@ namespace Seepage.Core.Solvers;
 /// second and fourth order elliptic problems", Computing 56, 1996, 179–196 — recalled from memory).
 /// Setup per level: symmetric strength |a_ij| ≥ θ_l √(a_ii a_jj) with θ_l = θ·2^{-l}; greedy aggregation;
 /// tentative prolongator from the constant near-null space; prolongator smoothing with ω = (4/3)/ρ(D⁻¹A),
-/// ρ from 12 Lanczos steps; Galerkin coarse matrix A_c = Pᵀ A P by two sparse products. Coarsening stops
+/// ρ from 8 Lanczos steps; Galerkin coarse matrix A_c = Pᵀ A P by two sparse products. Coarsening stops
 /// at <see cref="SolverOptions.CoarsestSize"/> rows, where a dense Cholesky factor solves exactly.
 /// Smoother: damped Jacobi with the same ω, one sweep before and one after the coarse correction, so the
-/// cycle is a symmetric positive definite operator and fits conjugate gradients.</summary>
+/// cycle is a symmetric positive definite operator and fits conjugate gradients. Apply uses work vectors
+/// held by the levels: one application at a time per instance.</summary>
 public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
 {
     private const int MaxLevels = 25;
@@ -19,9 +20,10 @@ public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
     private readonly DenseCholesky? _coarseFactor;
 
     public AlgebraicMultigridPreconditioner(CsrMatrix a, SolverOptions? options = null, CancellationToken cancellation = default)
-        : this(a, options ?? new SolverOptions(), cancellation, Stopwatch.StartNew()) { }
+        : this(a, options ?? new SolverOptions(), cancellation, Stopwatch.StartNew(), null) { }
 
-    internal AlgebraicMultigridPreconditioner(CsrMatrix a, SolverOptions options, CancellationToken cancellation, Stopwatch clock)
+    internal AlgebraicMultigridPreconditioner(CsrMatrix a, SolverOptions options, CancellationToken cancellation, Stopwatch clock,
+        double[]? fineDiagonal)
     {
         var start = clock.Elapsed;
         var levels = new List<AmgLevel>();
@@ -35,12 +37,7 @@ public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
                 throw new SolverNotConvergedException(Name, 0, double.NaN, options.RelativeTolerance,
                     $"time budget exceeded during multigrid setup (level {levels.Count})");
             totalNonZeros += matrix.NonZeros;
-            var diagonal = matrix.Diagonal();
-            double rho = SpectralRadius.OfJacobi(matrix, diagonal);
-            double omega = 4.0 / 3.0 / rho;
-            var weight = new double[matrix.Size];
-            for (int i = 0; i < weight.Length; i++) weight[i] = diagonal[i] > 0 ? omega / diagonal[i] : 0;
-
+            var diagonal = levels.Count == 0 && fineDiagonal is not null ? fineDiagonal : matrix.Diagonal();
             bool last = matrix.Size <= options.CoarsestSize || levels.Count == MaxLevels - 1;
             (int[] Aggregate, int Count) aggregation = default;
             if (!last)
@@ -49,10 +46,18 @@ public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
                 aggregation = Aggregation.Build(matrix, diagonal, theta);
                 last = aggregation.Count == 0 || aggregation.Count > 0.85 * matrix.Size;
             }
+            if (last && matrix.Size <= DenseLimit)
+            {
+                levels.Add(new AmgLevel(matrix, new double[matrix.Size], null, null));
+                _coarseFactor = new DenseCholesky(matrix);
+                break;
+            }
+            double omega = 4.0 / 3.0 / SpectralRadius.OfJacobi(matrix, diagonal, 8);
+            var weight = new double[matrix.Size];
+            for (int i = 0; i < weight.Length; i++) weight[i] = diagonal[i] > 0 ? omega / diagonal[i] : 0;
             if (last)
             {
-                levels.Add(new AmgLevel(matrix, weight, null, null));
-                if (matrix.Size <= DenseLimit) _coarseFactor = new DenseCholesky(matrix);
+                levels.Add(new AmgLevel(matrix, weight, null, null));   // coarsening stalled: smoothed, not factored
                 break;
             }
             var (p, coarseCandidate) = SmoothedProlongator.Build(matrix, diagonal, aggregation.Aggregate!, aggregation.Count, candidate, omega);
@@ -68,7 +73,7 @@ public sealed class AlgebraicMultigridPreconditioner : IPreconditioner
     }
 
     public string Name => "smoothed-aggregation AMG V(1,1)";
-    public int Levels => _levels?.Length ?? 0;
+    public int Levels => _levels.Length;
     /// <summary>Σ nnz(A_l) / nnz(A_0), dimensionless.</summary>
     public double OperatorComplexity { get; }
     /// <summary>Wall time of the setup, seconds.</summary>

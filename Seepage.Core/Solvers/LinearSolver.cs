@@ -12,12 +12,13 @@ public static class LinearSolver
     {
         var clock = Stopwatch.StartNew();
         if (b.Length != a.Size || x.Length != a.Size) throw new ArgumentException("b and x must have one entry per row of a.");
-        CheckDiagonal(a);
+        if (a.Size == 0) return new SolveReport("none (no unknowns)", 0, 0, 0, 0, clock.Elapsed.TotalSeconds, 0);
+        var diagonal = CheckedDiagonal(a);
         IPreconditioner m = options.Preconditioner switch
         {
             PreconditionerKind.Jacobi => new JacobiPreconditioner(a),
             PreconditionerKind.IncompleteCholesky => new IncompleteCholeskyPreconditioner(a),
-            _ => new AlgebraicMultigridPreconditioner(a, options, cancellation, clock),
+            _ => new AlgebraicMultigridPreconditioner(a, options, cancellation, clock, diagonal),
         };
         double setup = clock.Elapsed.TotalSeconds;
         var report = ConjugateGradient.Solve(a, b, x, m, options, cancellation, clock);
@@ -25,12 +26,13 @@ public static class LinearSolver
     }
 
     /// <summary>An SPD matrix has a positive diagonal; anything else is refused before iterating.</summary>
-    private static void CheckDiagonal(CsrMatrix a)
+    private static double[] CheckedDiagonal(CsrMatrix a)
     {
         var d = a.Diagonal();
         for (int i = 0; i < d.Length; i++)
             if (!(d[i] > 0) || double.IsInfinity(d[i]))
                 throw new SolverNotConvergedException("linear solve", 0, double.NaN, 0,
                     FormattableString.Invariant($"matrix not positive definite: diagonal entry {d[i]:E3} in row {i}"));
+        return d;
     }
 }

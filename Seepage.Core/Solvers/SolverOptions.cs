@@ -3,11 +3,11 @@ namespace Seepage.Core.Solvers;
 /// <summary>Stopping rule, limits and preconditioner choice of the linear solve.</summary>
 public sealed record SolverOptions
 {
-    /// <summary>Target of ‖b − A x‖₂ / ‖b‖₂ (dimensionless). Default 1e-10. Convergence policy: the flow
-    /// rate is a sum of reactions r_D = K_DI h_I + K_DD h_D, so its error is bounded by the energy error of
-    /// h; on the layered test sections (contrast 1e6, anisotropy 100) a residual of 1e-10 leaves the flow
-    /// within 1e-8 of the series formula, two orders below the 1e-6 the results need, at the cost of a few
-    /// more multigrid iterations than 1e-8 would take.</summary>
+    /// <summary>Target of ‖b − A x‖₂ / ‖b‖₂ (dimensionless). Default 1e-10. Convergence policy: the flow rate is
+    /// a sum of reactions K_DI h_I + K_DD h_D. On a mostly no-flow test section (contrast 1e6, anisotropy 100)
+    /// its error came out at about 0.3 × tolerance and the inflow/outflow imbalance at 1–2 × tolerance, so
+    /// 1e-8 would already give the 1e-6 the results need. 1e-10 keeps a 10⁴ margin for sections not tried,
+    /// at about 30 % more iterations. On layered sections it also reproduces Darcy's series formula to 1e-8.</summary>
     public double RelativeTolerance { get; init; } = 1e-10;
 
     /// <summary>Iteration cap. Default 20,000.</summary>

@@ -2,73 +2,85 @@ namespace Seepage.Core.Solvers;
 
 /// <summary>Sparse matrix product C = A B by Gustavson's row-by-row algorithm with a dense accumulator and
 /// a marker array (Gustavson, "Two fast algorithms for sparse matrices: multiplication and permuted
-/// transposition", ACM TOMS 4, 1978 — from memory). The two halves of the rows of A are done on two
-/// threads, each into its own buffers, then joined; columns are sorted per row.</summary>
-internal static class SparseProduct
+/// transposition", ACM TOMS 4, 1978 — from memory). A symbolic pass counts each row of C, so C is written
+/// straight into arrays of the exact size (fresh memory is costly: every new page is a fault). Both passes
+/// split the rows of A over two threads at a fixed row; columns are sorted per row.</summary>
+internal static unsafe class SparseProduct
 {
     public static CsrMatrix Multiply(CsrMatrix a, CsrMatrix b)
     {
         if (a.ColumnCount != b.Size) throw new ArgumentException("inner dimensions differ.");
-        int n = a.Size, split = a.SplitRow;
-        if (!TwoWay.Worthwhile(n))
-        {
-            var whole = Rows(a, b, 0, n);
-            return new CsrMatrix(n, b.ColumnCount, whole.RowStart, Trim(whole.Columns, whole.Count), Trim(whole.Values, whole.Count));
-        }
-        Part first = default, second = default;
-        Parallel.Invoke(() => first = Rows(a, b, 0, split), () => second = Rows(a, b, split, n));
-        int nnz = first.Count + second.Count;
+        int n = a.Size, m = b.ColumnCount;
+        int split = TwoWay.Worthwhile(n) ? a.SplitRow : n;
         var rowStart = new int[n + 1];
-        Array.Copy(first.RowStart, rowStart, split + 1);
-        for (int i = 1; i <= n - split; i++) rowStart[split + i] = first.Count + second.RowStart[i];
-        var cols = new int[nnz]; var vals = new double[nnz];
-        Array.Copy(first.Columns, cols, first.Count); Array.Copy(first.Values, vals, first.Count);
-        Array.Copy(second.Columns, 0, cols, first.Count, second.Count);
-        Array.Copy(second.Values, 0, vals, first.Count, second.Count);
-        return new CsrMatrix(n, b.ColumnCount, rowStart, cols, vals);
+        Run(n, split, (lo, hi) => Count(a, b, rowStart, lo, hi));
+        for (int i = 0; i < n; i++) rowStart[i + 1] += rowStart[i];
+        var cols = GC.AllocateUninitializedArray<int>(rowStart[n]);
+        var vals = GC.AllocateUninitializedArray<double>(rowStart[n]);
+        Run(n, split, (lo, hi) => Fill(a, b, rowStart, cols, vals, lo, hi));
+        return new CsrMatrix(n, m, rowStart, cols, vals);
     }
 
-    private readonly record struct Part(int[] RowStart, int[] Columns, double[] Values, int Count);
+    private static void Run(int n, int split, Action<int, int> body)
+    {
+        if (split >= n) body(0, n);
+        else Parallel.Invoke(() => body(0, split), () => body(split, n));
+    }
 
-    private static T[] Trim<T>(T[] a, int count) => a.Length == count ? a : a.AsSpan(0, count).ToArray();
+    /// <summary>rowStart[i+1] = number of distinct columns of row i of A B.</summary>
+    private static void Count(CsrMatrix a, CsrMatrix b, int[] rowStart, int lo, int hi)
+    {
+        var marker = GC.AllocateUninitializedArray<int>(b.ColumnCount); Array.Fill(marker, -1);
+        fixed (int* aS = a.RowStart, aC = a.Columns, bS = b.RowStart, bC = b.Columns, mark = marker)
+            for (int i = lo; i < hi; i++)
+            {
+                int count = 0;
+                for (int ka = aS[i]; ka < aS[i + 1]; ka++)
+                {
+                    int k = aC[ka];
+                    for (int kb = bS[k], end = bS[k + 1]; kb < end; kb++)
+                    {
+                        int j = bC[kb];
+                        if (mark[j] != i) { mark[j] = i; count++; }
+                    }
+                }
+                rowStart[i + 1] = count;
+            }
+    }
 
-    private static Part Rows(CsrMatrix a, CsrMatrix b, int lo, int hi)
+    private static void Fill(CsrMatrix a, CsrMatrix b, int[] rowStart, int[] cols, double[] vals, int lo, int hi)
     {
         int m = b.ColumnCount;
-        var marker = new int[m]; Array.Fill(marker, -1);
-        var accumulator = new double[m];
-        var rowStart = new int[hi - lo + 1];
-        // Upper estimate of the fill: the sum over the rows of a of the lengths of the rows of b it touches,
-        // capped by growth on demand below.
-        int capacity = Math.Max(16, (int)Math.Min(int.MaxValue / 2, (long)(a.RowStart[hi] - a.RowStart[lo]) * Math.Max(1, b.NonZeros / Math.Max(1, b.Size)) / 2 + 16));
-        var cols = new int[capacity]; var vals = new double[capacity];
-        int count = 0;
-        var aStart = a.RowStart; var aCols = a.Columns; var aVals = a.Values;
-        var bStart = b.RowStart; var bCols = b.Columns; var bVals = b.Values;
-        for (int i = lo; i < hi; i++)
-        {
-            int rowBegin = count;
-            for (int ka = aStart[i]; ka < aStart[i + 1]; ka++)
+        var marker = GC.AllocateUninitializedArray<int>(m); Array.Fill(marker, -1);
+        var accumulator = GC.AllocateUninitializedArray<double>(m);
+        fixed (int* aS = a.RowStart, aC = a.Columns, bS = b.RowStart, bC = b.Columns, mark = marker, c = cols)
+        fixed (double* aV = a.Values, bV = b.Values, acc = accumulator, v = vals)
+            for (int i = lo; i < hi; i++)
             {
-                int k = aCols[ka]; double aik = aVals[ka];
-                for (int kb = bStart[k]; kb < bStart[k + 1]; kb++)
+                int begin = rowStart[i], count = begin;
+                for (int ka = aS[i]; ka < aS[i + 1]; ka++)
                 {
-                    int j = bCols[kb];
-                    if (marker[j] < rowBegin)
+                    int k = aC[ka]; double aik = aV[ka];
+                    for (int kb = bS[k], end = bS[k + 1]; kb < end; kb++)
                     {
-                        marker[j] = count;
-                        if (count == cols.Length) { Array.Resize(ref cols, cols.Length * 2); Array.Resize(ref vals, vals.Length * 2); }
-                        cols[count++] = j;
-                        accumulator[j] = aik * bVals[kb];
+                        int j = bC[kb];
+                        if (mark[j] != i) { mark[j] = i; c[count++] = j; acc[j] = aik * bV[kb]; }
+                        else acc[j] += aik * bV[kb];
                     }
-                    else accumulator[j] += aik * bVals[kb];
                 }
+                InsertionSort(c + begin, count - begin);
+                for (int k = begin; k < count; k++) v[k] = acc[c[k]];
             }
-            var rowCols = cols.AsSpan(rowBegin, count - rowBegin);
-            rowCols.Sort();
-            for (int k = rowBegin; k < count; k++) vals[k] = accumulator[cols[k]];
-            rowStart[i - lo + 1] = count;
+    }
+
+    /// <summary>Rows here hold a few dozen entries at most: insertion sort beats a general sort.</summary>
+    internal static void InsertionSort(int* c, int length)
+    {
+        for (int p = 1; p < length; p++)
+        {
+            int v = c[p], q = p - 1;
+            while (q >= 0 && c[q] > v) { c[q + 1] = c[q]; q--; }
+            c[q + 1] = v;
         }
-        return new Part(rowStart, cols, vals, count);
     }
 }

@@ -1,43 +1,55 @@
 namespace Seepage.Core.Solvers;
 
-/// <summary>Estimate of ρ(D⁻¹A) for SPD A by a few Lanczos steps on the similar matrix D^{-1/2} A D^{-1/2}:
+/// <summary>Estimate of ρ(D⁻¹A) for SPD A by a few Lanczos steps on the similar matrix S A S, S = D^{-1/2}:
 /// the largest Ritz value converges fast to the top of the spectrum (Saad, "Iterative Methods for Sparse
-/// Linear Systems", 2nd ed., SIAM 2003, ch. 6 — from memory). The start vector is a fixed pseudo-random one
-/// so setups repeat exactly.</summary>
-internal static class SpectralRadius
+/// Linear Systems", 2nd ed., SIAM 2003, ch. 6 — from memory). α_j = v_jᵀ S A S v_j = tᵀ A t with t = S v_j
+/// comes out of the product itself; the three-term update and ‖w‖ share one pass. The start vector is a
+/// fixed pseudo-random one so setups repeat exactly.</summary>
+internal static unsafe class SpectralRadius
 {
-    public static double OfJacobi(CsrMatrix a, double[] diagonal, int steps = 12)
+    public static double OfJacobi(CsrMatrix a, double[] diagonal, int steps = 10)
     {
         int n = a.Size;
         if (n == 1) return 1;
         steps = Math.Min(steps, n);
-        var s = new double[n];   // D^{-1/2}
+        var s = GC.AllocateUninitializedArray<double>(n);
         for (int i = 0; i < n; i++) s[i] = diagonal[i] > 0 ? 1 / Math.Sqrt(diagonal[i]) : 1;
-        var v = new double[n]; var vPrev = new double[n]; var w = new double[n]; var t = new double[n];
+        var v = GC.AllocateUninitializedArray<double>(n); var vPrev = new double[n];
+        var y = GC.AllocateUninitializedArray<double>(n); var t = GC.AllocateUninitializedArray<double>(n);
         var random = new Random(20261201);
         for (int i = 0; i < n; i++) v[i] = random.NextDouble() + 0.5;
-        Scale(v, 1 / Math.Sqrt(VectorKernels.Dot(v, v)));
+        double vNorm = Math.Sqrt(VectorKernels.Dot(v, v));
+        for (int i = 0; i < n; i++) v[i] /= vNorm;
         var alpha = new double[steps]; var beta = new double[steps];
-        int m = 0;
+        int m = 0, split = TwoWay.Middle(n);
         for (int j = 0; j < steps; j++)
         {
-            for (int i = 0; i < n; i++) t[i] = s[i] * v[i];
-            a.Multiply(t, w);
-            for (int i = 0; i < n; i++) w[i] *= s[i];
-            double aj = VectorKernels.Dot(w, v);
+            TwoWay.For(n, split, (lo, hi) => { for (int i = lo; i < hi; i++) t[i] = s[i] * v[i]; });
+            double aj = a.MultiplyDot(t, y);                       // y = A t, α = tᵀ A t
             double bPrev = j > 0 ? beta[j - 1] : 0;
-            for (int i = 0; i < n; i++) w[i] -= aj * v[i] + bPrev * vPrev[i];
+            var (vj, vp) = (v, vPrev);
+            // w = S y − α v − β v_prev, stored over v_prev; returns ‖w‖².
+            double ww = TwoWay.Sum(n, split, (lo, hi) =>
+            {
+                double sum = 0;
+                for (int i = lo; i < hi; i++)
+                {
+                    double w = s[i] * y[i] - aj * vj[i] - bPrev * vp[i];
+                    vp[i] = w; sum += w * w;
+                }
+                return sum;
+            });
             alpha[j] = aj; m = j + 1;
-            double bj = Math.Sqrt(VectorKernels.Dot(w, w));
+            double bj = Math.Sqrt(ww);
             beta[j] = bj;
             if (bj <= 1e-12 * Math.Abs(aj)) break;
-            (vPrev, v) = (v, vPrev);
-            for (int i = 0; i < n; i++) v[i] = w[i] / bj;
+            // v_{j+1} = w / β_j lives in the old v_prev array; v_j becomes the new v_prev.
+            (v, vPrev) = (vp, vj);
+            double inv = 1 / bj;
+            TwoWay.For(n, split, (lo, hi) => { for (int i = lo; i < hi; i++) vp[i] *= inv; });
         }
         return LargestEigenvalue(alpha, beta, m);
     }
-
-    private static void Scale(double[] v, double f) { for (int i = 0; i < v.Length; i++) v[i] *= f; }
 
     /// <summary>Largest eigenvalue of the symmetric tridiagonal (α on the diagonal, β beside it), by
     /// bisection on the Sturm sequence count inside the Gershgorin interval.</summary>

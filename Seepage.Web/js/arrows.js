@@ -1,6 +1,5 @@
-// Velocity arrows on demand: on a regular grid over the section, the Darcy velocity direction v = −K·grad h
-// inside the triangle under each grid point (K from the zone's kx, ky and bedding angle). Display only: the
-// gradient is the constant one of the server's linear head field in that triangle.
+// Velocity arrows on demand: on a regular grid over the section, the Darcy velocity v = −K·grad h that the
+// server computed for the triangle under each grid point (field.velocities, m/s). Nothing is computed here.
 
 import { svg, round } from './dom.js';
 
@@ -13,9 +12,9 @@ export function drawVelocityArrows(layer, section, field, probe, bounds, count =
     for (let y = bounds.minY + step / 2; y < bounds.maxY; y += step) {
       const hit = probe.at(x, y);
       if (!hit) continue;
-      const soil = soilOf(section, field.zones?.[hit.triangle]);
-      if (!soil) continue;
-      const [vx, vy] = darcy(soil, hit.gradX, hit.gradY);
+      const v = field.velocities?.[hit.triangle];
+      if (!v) continue;
+      const [vx, vy] = v;
       const speed = Math.hypot(vx, vy);
       if (speed > 0) samples.push({ x, y, vx, vy, speed });
     }
@@ -34,18 +33,4 @@ export function drawVelocityArrows(layer, section, field, probe, bounds, count =
   }
   layer.append(svg('path', { class: 'velocity', d }));
   return samples.length;
-}
-
-function soilOf(section, zoneIndex) {
-  const zone = section.zones?.[zoneIndex];
-  return section.soils?.find(s => s.id === zone?.soil);
-}
-
-/** v = −K grad h with K = R diag(kx, ky) Rᵀ, R the rotation by the bedding angle (degrees, anticlockwise). */
-function darcy(soil, gx, gy) {
-  const kx = soil.kx, ky = soil.ky ?? soil.kx;
-  const t = ((soil.beddingAngle ?? 0) * Math.PI) / 180;
-  const c = Math.cos(t), s = Math.sin(t);
-  const kxx = kx * c * c + ky * s * s, kyy = kx * s * s + ky * c * c, kxy = (kx - ky) * c * s;
-  return [-(kxx * gx + kxy * gy), -(kxy * gx + kyy * gy)];
 }

@@ -37,7 +37,8 @@ export function renderFigures(container, result, unit) {
       row('largest exit gradient', `${fixed(e.maxGradient, 3)} at x = ${fixed(e.at?.[0], 2)} m, y = ${fixed(e.at?.[1], 2)} m`),
       row('critical gradient i_c = (Gs − 1)/(1 + e)', Number.isFinite(e.criticalGradient) ? fixed(e.criticalGradient, 3) : 'needs Gs and e of the exit soil'),
       row('factor of safety i_c / i', e.factor === null || e.factor === undefined ? '—' : fixed(e.factor, 2), `≥ ${fixed(e.requiredFactor, 2)}`, e.pass),
-      row('averaged over depth', `${fixed(e.depth, 2)} m (${e.method})`),
+      row('averaged over depth', `${fixed(e.depth, 2)} m`),
+      row('method', html('span', { class: 'method' }, e.method ?? '—')),
     ], true));
   }
 

@@ -130,6 +130,22 @@ export class Picture {
       t.setAttribute('x', (MARGIN.left + (Number(t.dataset.wx) - vis.x) * s).toFixed(1));
       t.setAttribute('y', (MARGIN.top + (Number(t.dataset.wy) - vis.y) * s).toFixed(1));
     }
+    this.hideCollidingLabels();
+  }
+
+  /** Feature labels win over contour labels; a label that would overlap one already shown is hidden. */
+  hideCollidingLabels() {
+    const shown = [];
+    const texts = [...this.layers.labels.querySelectorAll('text'), ...this.layers.contourLabels.querySelectorAll('text')];
+    for (const t of texts) {
+      t.removeAttribute('visibility');
+      let box;
+      try { box = t.getBBox(); } catch { continue; }
+      if (box.width === 0) continue;
+      const hit = shown.some(b => box.x < b.x + b.width + 2 && b.x < box.x + box.width + 2 && box.y < b.y + b.height && b.y < box.y + box.height);
+      if (hit) t.setAttribute('visibility', 'hidden');
+      else shown.push(box);
+    }
   }
 
   /** World point (metres, y up) under a mouse event, or null outside the world area. */

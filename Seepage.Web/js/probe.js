@@ -29,7 +29,7 @@ export class FieldProbe {
   }
 
   /**
-   * { triangle, head (m), gradX, gradY (∂h/∂x, ∂h/∂y, dimensionless) } at (x, y) in metres, or null when the
+   * { triangle, head (m), gradX, gradY (∂h/∂x, ∂h/∂y from the server, dimensionless) } at (x, y) in metres, or null when the
    * point is outside the mesh.
    */
   at(x, y) {
@@ -47,13 +47,9 @@ export class FieldProbe {
       const l1 = 1 - l2 - l3;
       const eps = -1e-9;
       if (l1 < eps || l2 < eps || l3 < eps) continue;
-      const h1 = heads[a], h2 = heads[b], h3 = heads[c];
-      return {
-        triangle: k,
-        head: l1 * h1 + l2 * h2 + l3 * h3,
-        gradX: ((h2 - h1) * (y3 - y1) - (h3 - h1) * (y2 - y1)) / det,
-        gradY: ((x2 - x1) * (h3 - h1) - (x3 - x1) * (h2 - h1)) / det,
-      };
+      // The head is interpolated for display; the gradient is the server's, for that triangle.
+      const [gradX, gradY] = this.field.gradients?.[k] ?? [NaN, NaN];
+      return { triangle: k, head: l1 * heads[a] + l2 * heads[b] + l3 * heads[c], gradX, gradY };
     }
     return null;
   }

@@ -37,6 +37,9 @@ public class AnalysisEndpointTests
         Assert.Equal(created.GetProperty("mesh").GetProperty("nodes").GetInt32(), field.GetProperty("nodes").GetArrayLength());
         Assert.True(field.GetProperty("equipotentials").GetArrayLength() > 0);
         Assert.True(field.GetProperty("flowLines").GetArrayLength() > 0);
+        int triangles = field.GetProperty("triangles").GetArrayLength();
+        Assert.Equal(triangles, field.GetProperty("gradients").GetArrayLength());
+        Assert.Equal(triangles, field.GetProperty("velocities").GetArrayLength());
     }
 
     [Fact]

@@ -111,4 +111,31 @@ public class AlgebraicMultigridTests
         Assert.Equal(r1.Iterations, r2.Iterations);
         Assert.Equal(x1, x2);
     }
+
+    // Convergence policy (SolverOptions.RelativeTolerance): at the default 1e-10 the flow, a sum of
+    // reactions, must agree with the flow of a solve converged to rounding (1e-14) within 1e-6 relative,
+    // and inflow must balance outflow to the same figure, on a mostly no-flow section with contrast 1e6 and
+    // anisotropy 100. Measured when written: flow error ≈ 0.3·tol and imbalance ≈ 1–2·tol at each tolerance.
+    [Fact]
+    public void Solve_DefaultTolerance_FlowWithinOneMillionthOfConverged()
+    {
+        var problem = Problems.PartialHeads(48, 1e6, 100);
+        bool Upstream(double x, double y) => x < 2;
+        var rows = new List<string>();
+        var reference = new double[problem.Unknowns];
+        LinearSolver.Solve(problem.Matrix, problem.Rhs, reference, new SolverOptions { RelativeTolerance = 1e-14 });
+        double exact = problem.Flow(reference, Upstream);
+        foreach (double tolerance in new[] { 1e-6, 1e-8, 1e-10 })
+        {
+            var x = new double[problem.Unknowns];
+            var report = LinearSolver.Solve(problem.Matrix, problem.Rhs, x, new SolverOptions { RelativeTolerance = tolerance });
+            double inflow = problem.Flow(x, Upstream), outflow = -problem.Flow(x, (xv, _) => !Upstream(xv, 0));
+            rows.Add($"tol={tolerance:E0} iterations={report.Iterations} flowError={Math.Abs(inflow - exact) / exact:E2} imbalance={Math.Abs(inflow - outflow) / exact:E2}");
+            if (tolerance == new SolverOptions().RelativeTolerance)
+            {
+                Assert.True(Math.Abs(inflow - exact) <= 1e-6 * exact, string.Join("\n", rows));
+                Assert.True(Math.Abs(inflow - outflow) <= 1e-6 * exact, string.Join("\n", rows));
+            }
+        }
+    }
 }

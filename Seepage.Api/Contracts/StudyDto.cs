@@ -1,0 +1,39 @@
+using System.Text.Json.Nodes;
+
+namespace Seepage.Api.Contracts;
+
+/// <summary>A study of design alternatives: its state (<c>running</c>, <c>done</c>, <c>failed</c>, <c>cancelled</c>, or <c>interrupted</c> when the server stopped while it ran), how many
+/// of the <c>total</c> alternatives are <c>done</c>, the varied members (JSON pointers) and the rows finished so far, in the
+/// alternatives' order. <c>seconds</c> is the wall time so far.</summary>
+public sealed record StudyDto(
+    string Id,
+    string Title,
+    DateTimeOffset CreatedAt,
+    string Status,
+    int Done,
+    int Total,
+    IReadOnlyList<string> Parameters,
+    IReadOnlyList<StudyRowDto> Rows,
+    string Caution,
+    double Seconds);
+
+/// <summary>One alternative's key figures: flow in m³/s per m, uplift force (sum over the structures) in kN/m, the largest
+/// averaged exit gradient and the factor against piping, the smallest heave factor at the cutoffs, required factors, and
+/// <c>pass</c> (every check with a factor passes). An alternative that could not be analysed has <c>valid</c> false and its
+/// <c>problems</c> keyed by JSON pointer into the changed section. <c>analysisId</c> names its stored analysis (with report).</summary>
+public sealed record StudyRowDto(
+    int Index,
+    string Name,
+    IReadOnlyDictionary<string, JsonNode?> Changes,
+    bool Valid,
+    IReadOnlyDictionary<string, string[]> Problems,
+    string? AnalysisId,
+    double? Flow,
+    double? UpliftForce,
+    double? MaxExitGradient,
+    double? ExitFactor,
+    double? ExitRequiredFactor,
+    double? HeaveFactor,
+    double? HeaveRequiredFactor,
+    bool? Pass,
+    double Seconds);

@@ -1,0 +1,92 @@
+using System.Text;
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using Seepage.Api.Storage;
+using Seepage.Core.Imports;
+using Seepage.Core.Sections;
+using Seepage.Core.Studies;
+
+namespace Seepage.Api.Endpoints;
+
+/// <summary>Reads a study definition: JSON <c>{ base, alternatives }</c>, or CSV alternatives with the base named by
+/// <c>?base=</c> (an analysis id or an example name). Problems are keyed by JSON pointer (JSON) or cell (CSV).</summary>
+public static class StudyBody
+{
+    public sealed record Outcome(JsonObject? Base, IReadOnlyList<StudyAlternative> Alternatives, Dictionary<string, string[]> Errors,
+        bool TooLarge);
+
+    public static async Task<Outcome> ReadAsync(HttpRequest request, string? baseName, AnalysisStore store, ExampleCatalog catalog,
+        CancellationToken cancellation)
+    {
+        var body = await ReadTextAsync(request, cancellation);
+        if (body is null) return new Outcome(null, [], [], true);
+        var errors = new Dictionary<string, string[]>();
+        string type = (request.ContentType ?? "").Split(';')[0].Trim().ToLowerInvariant();
+        if (type is "text/csv" or "application/csv")
+        {
+            var problems = new List<ImportProblem>();
+            var alternatives = StudyCsv.Read(body, problems);
+            foreach (var g in problems.GroupBy(p => p.Location)) errors[g.Key] = g.Select(p => p.Message).ToArray();
+            string? json = baseName is null ? null
+                : await store.GetJsonAsync(baseName, AnalysisPart.Section, cancellation) ?? catalog.Json(baseName);
+            if (json is null)
+                errors["base"] = [baseName is null
+                    ? "A CSV study needs ?base= naming the base section: an analysis id or an example name."
+                    : $"'{baseName}' is neither a stored analysis nor an example."];
+            var baseSection = json is null ? null : CheckBase(json, "", errors);
+            return Finish(baseSection, alternatives, errors);
+        }
+        JsonNode? root;
+        try { root = JsonNode.Parse(body, documentOptions: new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true }); }
+        catch (JsonException ex) { errors[""] = ["Malformed JSON: " + ex.Message]; return new Outcome(null, [], errors, false); }
+        if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors, false); }
+        JsonObject? section = obj["base"] is JsonObject b ? CheckBase(b.ToJsonString(), "/base", errors) : null;
+        if (obj["base"] is not JsonObject) errors["/base"] = ["must be the base section document (a JSON object)."];
+        var list = new List<StudyAlternative>();
+        if (obj["alternatives"] is not JsonArray array) errors["/alternatives"] = ["must be an array of { \"name\", \"changes\" }."];
+        else
+            for (int i = 0; i < array.Count; i++)
+            {
+                if (array[i] is not JsonObject alt || alt["changes"] is not JsonObject changes)
+                {
+                    errors[$"/alternatives/{i}/changes"] = ["must be an object of JSON pointer → value, e.g. { \"/heads/0/total\": 7.5 }."];
+                    continue;
+                }
+                string name = (alt["name"] as JsonValue)?.TryGetValue(out string? n) == true && !string.IsNullOrWhiteSpace(n) ? n! : $"alternative {i + 1}";
+                list.Add(new StudyAlternative(name, changes.Select(c => KeyValuePair.Create(c.Key, c.Value?.DeepClone())).ToList()));
+            }
+        return Finish(section, list, errors);
+    }
+
+    private static Outcome Finish(JsonObject? section, IReadOnlyList<StudyAlternative> alternatives, Dictionary<string, string[]> errors)
+    {
+        if (alternatives.Count == 0 && !errors.ContainsKey("/alternatives"))
+            errors["/alternatives"] = ["The study has no alternatives."];
+        if (alternatives.Count > StudyService.MaxAlternatives)
+            errors["/alternatives"] = [$"has {alternatives.Count} alternatives; at most {StudyService.MaxAlternatives} are accepted."];
+        return new Outcome(section, alternatives, errors, false);
+    }
+
+    // The base must be a valid section by itself; its problems are keyed under the base's pointer.
+    private static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
+    {
+        var document = SectionParser.Parse(json, out var parseProblems);
+        var problems = document is null ? parseProblems : SectionValidator.Validate(document).Problems;
+        foreach (var g in problems.GroupBy(p => prefix + p.Pointer)) errors[g.Key.Length == 0 ? "base" : g.Key] = g.Select(p => p.Message).ToArray();
+        return problems.Count == 0 ? JsonNode.Parse(json) as JsonObject : null;
+    }
+
+    private static async Task<string?> ReadTextAsync(HttpRequest request, CancellationToken cancellation)
+    {
+        if (request.ContentLength > SectionBody.MaxBytes) return null;
+        using var buffer = new MemoryStream();
+        var chunk = new byte[81920];
+        int read;
+        while ((read = await request.Body.ReadAsync(chunk, cancellation)) > 0)
+        {
+            buffer.Write(chunk, 0, read);
+            if (buffer.Length > SectionBody.MaxBytes) return null;
+        }
+        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
+    }
+}

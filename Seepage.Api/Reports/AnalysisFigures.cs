@@ -1,0 +1,101 @@
+using Seepage.Api.Contracts;
+using Seepage.Core.Sections;
+
+namespace Seepage.Api.Reports;
+
+/// <summary>The figures of an analysis report, built from the stored section, result document and field data.</summary>
+public static class AnalysisFigures
+{
+    private static readonly string[] ZoneFills = ["#f3e7c9", "#dfe8d0", "#e4dcef", "#d8e6ee", "#f0d9d2", "#e8e8e8"];
+    public const string Equipotential = "#1f5fbf", FlowLine = "#333333", Wall = "#000000", Head = "#1f8fbf", Drain = "#2a9d4a";
+
+    /// <summary>The section: zones shaded by soil, structures and cutoffs in black, head boundaries in blue, drains in green.</summary>
+    public static Figure Geometry(SectionDocument section)
+    {
+        var items = Zones(section, shaded: true);
+        items.AddRange(Walls(section));
+        foreach (var h in section.Heads ?? [])
+        {
+            items.Add(new FigureItem(Line(h.Along), Head, 3));
+            if (h.Along is { Count: > 0 } a)
+                items.Add(new FigureItem([new(a.Average(p => p[0]), a.Max(p => p[1]))], Head, Label: $"{h.Name}: h = {ReportFormat.N(h.Total)} m"));
+        }
+        foreach (var d in section.Drains ?? []) items.Add(new FigureItem(Line(d.Along), Drain, 3));
+        var legend = new List<LegendEntry> { new(Wall, "structure, cutoff"), new(Head, "fixed total head") };
+        if (section.Drains is { Count: > 0 }) legend.Add(new(Drain, "drain"));
+        return new Figure("x (m)", "elevation y (m)", true, items, legend);
+    }
+
+    /// <summary>The flow net: equipotentials at equal head drops and flow lines bounding equal-flow channels.</summary>
+    public static Figure FlowNet(SectionDocument section, FieldDto field)
+    {
+        var items = Zones(section, shaded: false);
+        foreach (var e in field.Equipotentials)
+            foreach (var path in e.Paths) items.Add(new FigureItem(Points(path), Equipotential, 0.8));
+        foreach (var l in field.FlowLines) items.Add(new FigureItem(Points(l.Points), FlowLine, 0.8));
+        foreach (var w in field.Walls) items.Add(new FigureItem(Points(w), Wall, 2.5));
+        return new Figure("x (m)", "elevation y (m)", true, items,
+            [new(Equipotential, "equipotential"), new(FlowLine, "flow line"), new(Wall, "structure, cutoff")]);
+    }
+
+    /// <summary>Pore pressure along each structure base (kPa against x), shaded down to zero.</summary>
+    public static Figure Uplift(AnalysisResultDto result)
+    {
+        var items = new List<FigureItem>();
+        var legend = new List<LegendEntry>();
+        string[] colors = ["#c0392b", "#8e44ad", "#d35400", "#16a085"];
+        for (int i = 0; i < result.Uplift.Count; i++)
+        {
+            var u = result.Uplift[i];
+            string color = colors[i % colors.Length];
+            var line = u.Stations.Select(s => new FigurePoint(s.X, s.Pressure)).ToList();
+            if (line.Count == 0) continue;
+            var area = new List<FigurePoint> { new(line[0].X, 0) };
+            area.AddRange(line);
+            area.Add(new(line[^1].X, 0));
+            items.Add(new FigureItem(area, color, 1.5, Fill: color + "33"));
+            legend.Add(new(color, $"{u.Structure}: {ReportFormat.N(u.Force)} kN/m at x = {ReportFormat.N(u.CentroidX)} m"));
+        }
+        return new Figure("x (m)", "uplift pressure (kPa)", false, items, legend);
+    }
+
+    /// <summary>The averaged upward exit gradient along the exit surface, with the allowable gradient i_c / F_required.</summary>
+    public static Figure? ExitProfile(AnalysisResultDto result)
+    {
+        if (result.Exit is not { Profile.Count: > 0 } exit) return null;
+        var line = exit.Profile.Select(p => new FigurePoint(p.X, p.Gradient)).ToList();
+        var items = new List<FigureItem> { new(line, "#1f5fbf", 1.5) };
+        var legend = new List<LegendEntry> { new("#1f5fbf", $"exit gradient (averaged over {ReportFormat.N(exit.Depth)} m)") };
+        if (exit.CriticalGradient is { } ic && exit.RequiredFactor > 0)
+        {
+            double allowable = ic / exit.RequiredFactor;
+            items.Add(new FigureItem([new(line[0].X, allowable), new(line[^1].X, allowable)], "#c0392b", 1.5, Dashed: true));
+            legend.Add(new("#c0392b", $"allowable i_c/F = {ReportFormat.N(ic)}/{ReportFormat.N(exit.RequiredFactor)} = {ReportFormat.N(allowable)}", true));
+        }
+        items.Add(new FigureItem([new(line[0].X, 0)], "#ffffff", 0));   // keep zero in view
+        return new Figure("x (m)", "upward exit gradient", false, items, legend);
+    }
+
+    private static List<FigureItem> Zones(SectionDocument section, bool shaded)
+    {
+        var soils = (section.Soils ?? []).Select(s => s.Id).ToList();
+        return (section.Zones ?? []).Where(z => z.Outline is { Count: >= 3 }).Select(z =>
+        {
+            int i = Math.Max(0, soils.IndexOf(z.Soil));
+            return new FigureItem(Line(z.Outline), "#777777", 0.7, Fill: shaded ? ZoneFills[i % ZoneFills.Length] : "none");
+        }).ToList();
+    }
+
+    private static IEnumerable<FigureItem> Walls(SectionDocument section)
+    {
+        foreach (var s in section.Structures ?? []) yield return new FigureItem(Line(s.Base), Wall, 3);
+        foreach (var c in section.Cutoffs ?? [])
+            if (c.Top is { Length: 2 } && c.Tip is { Length: 2 })
+                yield return new FigureItem([new(c.Top[0], c.Top[1]), new(c.Tip[0], c.Tip[1])], Wall, 3);
+    }
+
+    private static List<FigurePoint> Line(List<double[]>? points) =>
+        (points ?? []).Where(p => p.Length >= 2).Select(p => new FigurePoint(p[0], p[1])).ToList();
+
+    private static List<FigurePoint> Points(double[][] points) => points.Where(p => p.Length >= 2).Select(p => new FigurePoint(p[0], p[1])).ToList();
+}

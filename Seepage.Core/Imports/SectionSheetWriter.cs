@@ -1,0 +1,57 @@
+using Seepage.Core.Sections;
+using L = Seepage.Core.Imports.SectionSheetLayout;
+
+namespace Seepage.Core.Imports;
+
+/// <summary>Writes a section document in the blocks of <see cref="SectionSheetLayout"/>: one (block name, rows) pair per
+/// block present in the document, the first row being the column names with their units.</summary>
+public static class SectionSheetWriter
+{
+    public static List<(string Block, List<object?[]> Rows)> Blocks(SectionDocument d)
+    {
+        string k = d.ConductivityUnit ?? "m/s";
+        var blocks = new List<(string, List<object?[]>)>();
+        void Add(string block, IEnumerable<object?[]> rows) => blocks.Add((block, [Header(block, k), .. rows]));
+
+        Add(L.Section, [[d.Title, d.Description, d.ConductivityUnit, d.WaterUnitWeight, d.StructureLength]]);
+        if (d.Soils is { } soils)
+            Add(L.Soils, soils.Select(s => new object?[] { s.Id, s.Kx, s.Ky, s.BeddingAngle, s.SpecificGravity, s.VoidRatio, s.SaturatedUnitWeight, s.CreepClass }));
+        if (d.Zones is { } zones)
+            Add(L.Zones, zones.SelectMany((z, i) => (z.Outline ?? []).Select((p, v) => new object?[]
+                { (double)(i + 1), v == 0 ? z.Soil : null, X(p), Y(p), v == 0 ? z.Size : null })));
+        if (d.Structures is { } structures)
+            Add(L.Structures, structures.SelectMany(s => (s.Base ?? []).Select(p => new object?[] { s.Name, X(p), Y(p) })));
+        if (d.Cutoffs is { } cutoffs)
+            Add(L.Cutoffs, cutoffs.Select(c => new object?[] { c.Name, X(c.Top), Y(c.Top), X(c.Tip), Y(c.Tip), c.Thickness, c.Kx }));
+        if (d.Heads is { } heads)
+            Add(L.Heads, heads.SelectMany(h => (h.Along ?? []).Select((p, v) => new object?[] { h.Name, v == 0 ? h.Total : null, X(p), Y(p) })));
+        if (d.Drains is { } drains)
+            Add(L.Drains, drains.SelectMany(h => (h.Along ?? []).Select(p => new object?[] { h.Name, X(p), Y(p) })));
+        if (d.ExitCheck is not null || d.HeaveCheck is not null)
+        {
+            var rows = new List<object?[]>();
+            if (d.ExitCheck is { } e)
+            {
+                var along = e.Along is { Count: > 0 } a ? a : [null!];
+                rows.AddRange(along.Select((p, v) => new object?[]
+                    { "exit", X(p), Y(p), v == 0 ? e.Depth : null, v == 0 ? e.RequiredFactor : null }));
+            }
+            if (d.HeaveCheck is { } h) rows.Add(["heave", null, null, null, h.RequiredFactor]);
+            Add(L.Checks, rows);
+        }
+        if (d.Mesh is { } m) Add(L.Mesh, [[m.Size, m.MinAngle]]);
+        return blocks;
+    }
+
+    /// <summary>The column names of a block, each followed by its unit in parentheses where it has one.</summary>
+    public static object?[] Header(string block, string conductivityUnit) =>
+        L.Columns[block].Select(c => (object?)(L.Unit(c) switch
+        {
+            null => c,
+            "k" => $"{c} ({conductivityUnit})",
+            string unit => $"{c} ({unit})",
+        })).ToArray();
+
+    private static object? X(double[]? p) => p is { Length: > 0 } ? p[0] : null;
+    private static object? Y(double[]? p) => p is { Length: > 1 } ? p[1] : null;
+}
