@@ -229,4 +229,8 @@ function wireControls() {
   byId('export-uplift').addEventListener('click', needResult(() => download(new Blob([upliftCsv(state.result)], { type: 'text/csv' }), `${name()}-uplift.csv`)));
   byId('export-exit').addEventListener('click', needResult(() => download(new Blob([exitCsv(state.result)], { type: 'text/csv' }), `${name()}-exit-profile.csv`)));
   byId('export-json').addEventListener('click', needResult(() => download(new Blob([JSON.stringify(state.result, null, 2)], { type: 'application/json' }), `${name()}-result.json`)));
+  // The memo is built by the server from the stored analysis; the page only opens it.
+  const memo = query => needResult(() => window.open(`/api/v1/analyses/${encodeURIComponent(state.result.id)}/report${query}`, '_blank', 'noopener'));
+  byId('open-memo').addEventListener('click', memo(''));
+  byId('open-memo-pdf').addEventListener('click', memo('?format=pdf'));
 }
