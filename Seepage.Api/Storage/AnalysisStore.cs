@@ -5,23 +5,14 @@ namespace Seepage.Api.Storage;
 /// <summary>Analyses kept in an embedded SQLite database file, so they survive a restart.</summary>
 public sealed class AnalysisStore
 {
-    private readonly string _connectionString;
+    private readonly SqliteFile _file;
 
-    public AnalysisStore(string databasePath)
-    {
-        string? folder = Path.GetDirectoryName(Path.GetFullPath(databasePath));
-        if (!string.IsNullOrEmpty(folder)) Directory.CreateDirectory(folder);
-        _connectionString = new SqliteConnectionStringBuilder { DataSource = databasePath, Pooling = false }.ToString();
-        using var connection = Open();
-        using var command = connection.CreateCommand();
-        command.CommandText = """
+    public AnalysisStore(string databasePath) => _file = new SqliteFile(databasePath, """
             PRAGMA journal_mode = WAL;
             CREATE TABLE IF NOT EXISTS analyses (
                 id TEXT PRIMARY KEY, created_at TEXT NOT NULL, title TEXT NOT NULL,
                 section_json TEXT NOT NULL, result_json TEXT NOT NULL, field_json TEXT NOT NULL);
-            """;
-        command.ExecuteNonQuery();
-    }
+            """);
 
     public async Task SaveAsync(StoredAnalysis a, CancellationToken cancellation)
     {
@@ -53,12 +44,7 @@ public sealed class AnalysisStore
         return await command.ExecuteScalarAsync(cancellation) as string;
     }
 
-    private SqliteConnection Open()
-    {
-        var connection = new SqliteConnection(_connectionString);
-        connection.Open();
-        return connection;
-    }
+    private SqliteConnection Open() => _file.Open();
 }
 
 /// <summary>Which JSON of a stored analysis to read.</summary>

@@ -6,23 +6,14 @@ namespace Seepage.Api.Storage;
 /// study document (state and rows so far), updated as alternatives finish.</summary>
 public sealed class StudyStore
 {
-    private readonly string _connectionString;
+    private readonly SqliteFile _file;
     private readonly SemaphoreSlim _write = new(1, 1);
 
-    public StudyStore(string databasePath)
-    {
-        string? folder = Path.GetDirectoryName(Path.GetFullPath(databasePath));
-        if (!string.IsNullOrEmpty(folder)) Directory.CreateDirectory(folder);
-        _connectionString = new SqliteConnectionStringBuilder { DataSource = databasePath, Pooling = false }.ToString();
-        using var connection = Open();
-        using var command = connection.CreateCommand();
-        command.CommandText = """
+    public StudyStore(string databasePath) => _file = new SqliteFile(databasePath, """
             CREATE TABLE IF NOT EXISTS studies (
                 id TEXT PRIMARY KEY, created_at TEXT NOT NULL, title TEXT NOT NULL, status TEXT NOT NULL,
                 definition_json TEXT NOT NULL, study_json TEXT NOT NULL, updated_at TEXT NOT NULL);
-            """;
-        command.ExecuteNonQuery();
-    }
+            """);
 
     public Task CreateAsync(string id, DateTimeOffset created, string title, string definitionJson, string studyJson, CancellationToken cancellation) =>
         WriteAsync("INSERT INTO studies VALUES ($id, $created, $title, 'running', $definition, $study, $created)", cancellation,
@@ -58,10 +49,5 @@ public sealed class StudyStore
         finally { _write.Release(); }
     }
 
-    private SqliteConnection Open()
-    {
-        var connection = new SqliteConnection(_connectionString);
-        connection.Open();
-        return connection;
-    }
+    private SqliteConnection Open() => _file.Open();
 }
