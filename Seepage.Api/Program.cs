@@ -16,6 +16,7 @@ app.MapExampleEndpoints();
 app.MapImportEndpoints();
 app.MapStudyEndpoints();
 app.MapReportEndpoints();
+app.MapSystemExportEndpoints();
 app.LogPageAddress();
 app.Run();
 

@@ -56,6 +56,14 @@ public static class Analysis
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>
+    /// <summary>Meshes and assembles a section without solving it: the condensed SPD system K_FF h_F = −K_FD h_D,
+    /// e.g. to export it in Matrix Market form for checking with other tools.</summary>
+    public static LinearSystem AssembleSystem(SectionModel section, CancellationToken cancellation = default)
+    {
+        var mesh = MakeMesh(section, [], cancellation);
+        return FieldSolver.Assemble(section, mesh, section.Mesh.Order).System;
+    }
+
     public static Mesh MakeMesh(SectionModel section, List<string> warnings, CancellationToken cancellation = default)
     {
         // Strong grading at singular points (tips, corners): the flow error there dominates otherwise.

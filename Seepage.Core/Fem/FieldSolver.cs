@@ -9,11 +9,25 @@ namespace Seepage.Core.Fem;
 public sealed record FieldSolution(Mesh Mesh, MeshBoundary Boundary, QuadraticDofs? Quadratic, FixedHeads FixedHeads,
     LinearSystem System, HeadField Field, SolveReport Report);
 
+/// <summary>The assembled, not yet solved head problem: boundary, unknowns, fixed heads, condensed system, zone tensors.</summary>
+public sealed record AssembledProblem(MeshBoundary Boundary, QuadraticDofs? Quadratic, FixedHeads FixedHeads, LinearSystem System,
+    IReadOnlyList<ConductivityTensor> Tensors);
+
 /// <summary>Assembles and solves the head problem of a section on a given mesh with elements of order 1 or 2.</summary>
 public static class FieldSolver
 {
     public static FieldSolution Solve(SectionModel section, Mesh mesh, int order, SolverOptions options,
         CancellationToken cancellation = default)
+    {
+        var (boundary, quadratic, fixedHeads, system, tensors) = Assemble(section, mesh, order);
+        var free = new double[system.Matrix.Size];
+        var report = LinearSolver.Solve(system.Matrix, system.Rhs, free, options, cancellation);
+        var heads = system.Expand(free);
+        return new FieldSolution(mesh, boundary, quadratic, fixedHeads, system, new HeadField(mesh, heads, tensors, quadratic), report);
+    }
+
+    /// <summary>Builds K (all unknowns), fixes the heads and condenses to the SPD system K_FF h_F = −K_FD h_D.</summary>
+    public static AssembledProblem Assemble(SectionModel section, Mesh mesh, int order)
     {
         var tensors = section.Zones.Select(z => ConductivityTensor.Of(section.Soils[z.Soil])).ToList();
         var boundary = new MeshBoundary(mesh);
@@ -23,10 +37,6 @@ public static class FieldSolver
         var full = quadratic is null
             ? GlobalAssembler.Assemble(mesh, SparsityPattern.Of(mesh), tensors)
             : GlobalAssembler.AssembleQuadratic(mesh, quadratic, SparsityPattern.Of(quadratic.Count, quadratic.Elements, 6), tensors);
-        var system = LinearSystem.Condense(full, fixedHeads);
-        var free = new double[system.Matrix.Size];
-        var report = LinearSolver.Solve(system.Matrix, system.Rhs, free, options, cancellation);
-        var heads = system.Expand(free);
-        return new FieldSolution(mesh, boundary, quadratic, fixedHeads, system, new HeadField(mesh, heads, tensors, quadratic), report);
+        return new AssembledProblem(boundary, quadratic, fixedHeads, LinearSystem.Condense(full, fixedHeads), tensors);
     }
 }

@@ -1,0 +1,50 @@
+using System.Text;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Core;
+using Seepage.Core.Meshing;
+using Seepage.Core.Solvers;
+
+namespace Seepage.Api.Endpoints;
+
+/// <summary>The assembled linear system of a section in Matrix Market form, for checking with other tools.</summary>
+public static class SystemExportEndpoints
+{
+    public static IEndpointRouteBuilder MapSystemExportEndpoints(this IEndpointRouteBuilder app)
+    {
+        app.MapPost("/api/v1/sections/system", Export)
+            .WithTags("Sections")
+            .WithName("ExportSectionSystem")
+            .WithSummary("Export the assembled system in Matrix Market form")
+            .WithDescription("Meshes the posted section and assembles the condensed symmetric positive definite system " +
+                "K_FF h_F = −K_FD h_D (fixed heads eliminated; conductivities in m/s, so K in m²/s per m). `part=matrix` " +
+                "(default) gives K_FF as a Matrix Market coordinate file, `part=rhs` the right-hand side as an array file.")
+            .Accepts<Seepage.Core.Sections.SectionDocument>("application/json")
+            .Produces<string>(StatusCodes.Status200OK, "text/plain")
+            .ProducesProblem(StatusCodes.Status413PayloadTooLarge);
+        return app;
+    }
+
+    public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> Export(HttpRequest request,
+        string? part, CancellationToken cancellation)
+    {
+        part ??= "matrix";
+        if (part is not ("matrix" or "rhs"))
+            return TypedResults.ValidationProblem(new Dictionary<string, string[]> { ["part"] = ["must be 'matrix' or 'rhs'."] },
+                title: "Unknown part.");
+        var body = await SectionBody.ReadAsync(request, cancellation);
+        if (body.TooLarge) return SectionProblems.TooLarge();
+        if (body.Model is null || body.Problems.Count > 0) return SectionProblems.Invalid(body);
+        try
+        {
+            var system = await Task.Run(() => Analysis.AssembleSystem(body.Model, cancellation), cancellation);
+            var text = new StringWriter(new StringBuilder(), System.Globalization.CultureInfo.InvariantCulture);
+            if (part == "matrix") MatrixMarket.Write(system.Matrix, text); else MatrixMarket.WriteVector(system.Rhs, text);
+            return TypedResults.Text(text.ToString(), "text/plain");
+        }
+        catch (MeshingException ex)
+        {
+            return TypedResults.ValidationProblem(new Dictionary<string, string[]> { [""] = [ex.Message] },
+                title: "The section could not be meshed.", detail: ex.Message);
+        }
+    }
+}
