@@ -25,7 +25,7 @@ public static class Analysis
         var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
         double tolerance = 1e-6 * section.Extent;
 
-        var (flow, _) = FlowCalculator.Compute(solution.System, field.Heads, boundary, section, tolerance, solution.Quadratic);
+        var (flow, reactions) = FlowCalculator.Compute(solution.System, field.Heads, boundary, section, tolerance, solution.Quadratic);
         var sampler = new FieldSampler(field);
         var uplift = UpliftCalculator.Compute(section, field, boundary, tolerance);
         var exit = ExitGradientCalculator.Compute(section, sampler, boundary, tolerance, warnings);
@@ -33,7 +33,7 @@ public static class Analysis
         var exitSoil = ExitSoil(section, sampler, exit);
         var creep = CreepCalculator.Compute(section, exitSoil);
         var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
-        var gauges = GaugeCalculator.Compute(section, sampler);
+        var gauges = GaugeCalculator.Compute(section, sampler, reactions, solution.FixedHeads.IsFixed);
         var convergence = section.Mesh.ConvergenceCheck
             ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
         var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles

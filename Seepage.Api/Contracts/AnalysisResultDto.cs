@@ -68,8 +68,10 @@ public sealed record MeshStatsDto(int Nodes, int Triangles, double MinAngle, dou
 public sealed record SolverStatsDto(string Method, int Levels, double OperatorComplexity, int Unknowns, int Iterations, double Residual, double Seconds);
 
 /// <summary>Flow across a gauge polyline, m³/s per m (positive along the normal 90° counter-clockwise from the
-/// walking direction); length of the polyline inside the soil in m.</summary>
-public sealed record GaugeDto(string Name, double Flow, double Length);
+/// walking direction); length of the polyline inside the soil in m. <c>method</c>: a gauge that parts the section is read
+/// from the boundary fluxes of one side (conservative, balances with the boundary flows); one that ends inside the
+/// soil from the element velocities along it. <c>lineIntegral</c>: the element-velocity integral, m³/s per m, for comparison.</summary>
+public sealed record GaugeDto(string Name, double Flow, double Length, string Method, double LineIntegral);
 
 /// <summary>Convergence over two uniform refinements: triangles of the three meshes and, per figure, the three values
 /// (unit as named), the observed order, the Richardson estimate and the estimated relative error of the reported value.</summary>

@@ -31,7 +31,7 @@ public static class ResultMapper
         var solver = new SolverStatsDto(s.Method, s.Levels, s.OperatorComplexity, s.Unknowns, s.Iterations, s.Residual, s.Seconds);
         return new AnalysisResultDto(id, r.Section.Title, createdAt, flow, uplift, exit, heave, creep, mesh, solver,
             r.Warnings, AnalysisResult.Caution, r.Seconds, Independent(r.IndependentVariables),
-            r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length)).ToList(),
+            r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length, g.Method, g.LineIntegral)).ToList(),
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
             r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null);

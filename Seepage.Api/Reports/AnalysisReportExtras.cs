@@ -27,8 +27,8 @@ public static class AnalysisReportExtras
             if (notes.Count > 0) yield return new ReportList(notes);
         }
         if (r.Gauges is { Count: > 0 } gauges)
-            yield return new ReportTable("Flow gauges", ["Gauge", "Flow (m³/s per m)", "Length in soil (m)"],
-                gauges.Select(g => (IReadOnlyList<string>)[g.Name, N(g.Flow), N(g.Length)]).ToList());
+            yield return new ReportTable("Flow gauges", ["Gauge", "Flow (m³/s per m)", "Read from", "Velocity line integral (m³/s per m)", "Length in soil (m)"],
+                gauges.Select(g => (IReadOnlyList<string>)[g.Name, N(g.Flow), g.Method, N(g.LineIntegral), N(g.Length)]).ToList());
         if (r.Convergence is { } c)
             yield return new ReportTable($"Convergence over two uniform refinements ({string.Join(" / ", c.Triangles)} triangles)",
                 ["Figure", "Unit", "Coarse", "Medium", "Fine", "Observed order", "Richardson estimate", "Estimated relative error"],

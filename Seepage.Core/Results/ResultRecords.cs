@@ -54,5 +54,6 @@ public sealed record CreepCheck(double WeightedLength, double Ratio, double? Req
 public sealed record CreepResult(CreepCheck Lane, CreepCheck Bligh);
 
 /// <summary>The flow crossing one gauge polyline, m³/s per m, positive along the normal 90° counter-clockwise from
-/// the walking direction; Length is the part of the polyline inside the soil, m.</summary>
-public sealed record GaugeFlow(string Name, double Flow, double Length);
+/// the walking direction; Length is the part of the polyline inside the soil, m; Method says how the flow was read;
+/// LineIntegral is the element-velocity integral along the line beside it for comparison, m³/s per m.</summary>
+public sealed record GaugeFlow(string Name, double Flow, double Length, string Method, double LineIntegral);
