@@ -64,7 +64,7 @@ public static class ResultMapper
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :
-        new(v.Structure, v.FloorLength, v.HeadDifference,
+        new(v.Structure, v.FloorLength, v.FloorThickness, v.HeadDifference,
             v.Piles.Select(p => new KeyPointPileDto(p.Cutoff, p.Position, p.X, p.Depth, Key(p.E), Key(p.D), Key(p.C))).ToList(),
             v.ExitGradient, v.FeExitGradient, v.FeRowExitGradient, v.CorrectionsApplied, v.CorrectionsNotApplied, v.Notes, v.Source);
 

@@ -13,11 +13,12 @@ public static class AnalysisReportExtras
         if (r.IndependentVariables is { } iv)
         {
             yield return new ReportParagraph($"Method of independent variables for {iv.Structure} (floor length {N(iv.FloorLength)} m, " +
+                (iv.FloorThickness > 0 ? $"underside {N(iv.FloorThickness)} m below the ground, " : "") +
                 $"head difference {N(iv.HeadDifference)} m), beside the FE values; pressures in per cent of the head difference. Source: {iv.Source}.");
             yield return new ReportTable("Key points: independent variables and finite elements",
                 ["Cutoff", "Point", "Closed form (%)", "Correction (%)", "Corrected (%)", "FE (%)", "FE − corrected (%)"],
                 iv.Piles.SelectMany(p => new[] { ("E", p.E), ("D", p.D), ("C", p.C) }.Select(k => (IReadOnlyList<string>)
-                    [$"{p.Cutoff} ({p.Position}, x = {N(p.X)} m, d = {N(p.Depth)} m)", k.Item1, N(k.Item2.Basic), N(k.Item2.Correction),
+                    [$"{p.Cutoff} ({p.Position}, x = {N(p.X)} m, d = {N(p.Depth)} m below the ground)", k.Item1, N(k.Item2.Basic), N(k.Item2.Correction),
                      N(k.Item2.Corrected), N(k.Item2.Fe), N(k.Item2.Difference)])).ToList());
             var notes = new List<string>();
             if (iv.ExitGradient is not null) notes.Add($"Exit gradient G_E by the method: {N(iv.ExitGradient)}; FE averaged: {N(iv.FeExitGradient)}; FE element row: {N(iv.FeRowExitGradient)}.");

@@ -18,10 +18,15 @@ public sealed record IndependentVariableResult(
     IReadOnlyList<string> CorrectionsApplied,
     IReadOnlyList<string> CorrectionsNotApplied,
     IReadOnlyList<string> Notes,
-    string Source);
+    string Source)
+{
+    /// <summary>Thickness of the floor below the ground level (m): 0 for a floor on the ground.</summary>
+    public double FloorThickness { get; init; }
+}
 
-/// <summary>One pile of the method: its position ("upstream", "intermediate", "downstream"), x (m), depth below the
-/// floor (m) and the key points E (upstream face at the floor), D (tip), C (downstream face at the floor).</summary>
+/// <summary>One pile of the method: its position ("upstream", "intermediate", "downstream"), x (m), depth d below the
+/// ground level (m; the underside of the floor when it sits on the ground) and the key points E (upstream face at the
+/// underside of the floor), D (tip), C (downstream face at the underside).</summary>
 public sealed record KeyPointPile(string Cutoff, string Position, double X, double Depth, KeyPoint E, KeyPoint D, KeyPoint C);
 
 /// <summary>A key point: the basic value of the closed form, the sum of the applied corrections, the corrected
