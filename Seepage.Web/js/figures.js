@@ -2,6 +2,7 @@
 
 import { html, clear } from './dom.js';
 import { sig, fixed } from './format.js';
+import { renderEvidence } from './evidence.js';
 
 /** Flow per metre in the chosen unit: [value, unit label]. Values come from the server, not converted here. */
 export function flowIn(flow, unit) {
@@ -55,6 +56,8 @@ export function renderFigures(container, result, unit) {
       creepRow('line of creep (Bligh)', c.bligh),
     ], true));
   }
+
+  renderEvidence(container, result);
 
   const m = result.mesh, s = result.solver;
   container.append(html('h3', {}, 'Mesh and solver'), table([

@@ -1,0 +1,51 @@
+using System.Globalization;
+using System.Text.Json;
+using System.Text.Json.Nodes;
+
+namespace Seepage.Browser.Tests;
+
+/// <summary>The figures panel shows the reviewer's evidence (independent variables, gauges, truncation) as the API reports it.</summary>
+[Collection(BrowserCollection.Name)]
+public sealed class EvidenceTests(BrowserFixture fixture)
+{
+    [Fact]
+    public async Task FiguresPanel_SectionWithGauge_ShowsIndependentVariablesGaugeAndTruncation()
+    {
+        await using var session = await PageSession.OpenAsync(fixture);
+        await session.LoadDemoAsync();
+        var page = session.Page;
+        var firstId = await page.GetAttributeAsync("#figures", "data-analysis-id");
+
+        // The demo floor with a gauge from its middle down to the impervious base, and the truncation check on.
+        var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
+        section["gauges"] = JsonNode.Parse("""[{ "name": "below the floor", "along": [[2, 0], [2, -28]] }]""");
+        section["truncationCheck"] = true;
+        await page.FillAsync("#editor", section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+        await page.ClickAsync("#run");
+        await page.WaitForFunctionAsync($"() => document.querySelector('#figures')?.dataset.analysisId !== '{firstId}' && document.body.dataset.runState === 'done'",
+            null, new() { Timeout = 60_000 });
+        var id = await page.GetAttributeAsync("#figures", "data-analysis-id");
+        using var client = new HttpClient { BaseAddress = fixture.Api.BaseAddress };
+        using var result = JsonDocument.Parse(await client.GetStringAsync($"api/v1/analyses/{id}"));
+        var root = result.RootElement;
+
+        var piles = root.GetProperty("independentVariables").GetProperty("piles");
+        var rows = page.Locator("#iv-table tbody tr");
+        Assert.Equal(3 * piles.GetArrayLength(), await rows.CountAsync());
+        var cells = await rows.First.Locator("td").AllInnerTextsAsync();
+        Assert.Equal(piles[0].GetProperty("e").GetProperty("fe").GetDouble(), Number(cells[2]), 0.051);
+
+        var gauge = root.GetProperty("gauges")[0];
+        var gaugeCells = await page.Locator("#gauge-table tbody tr").First.Locator("td").AllInnerTextsAsync();
+        Assert.Equal("below the floor", gaugeCells[0]);
+        double shown = ShownNumber.Parse(gaugeCells[1]), flow = gauge.GetProperty("flow").GetDouble();
+        Assert.True(Math.Abs(shown - flow) <= 6e-4 * Math.Abs(flow), $"gauge shows {shown}, API {flow}");
+        // The gauge parts the section, so it carries the whole discharge (continuity).
+        Assert.Equal(root.GetProperty("flow").GetProperty("perMetre").GetDouble(), flow, 1e-6 * Math.Abs(flow));
+        Assert.Equal(3, await page.Locator("#truncation-table tbody tr").CountAsync());
+        await session.ScreenshotAsync("evidence");
+        session.AssertNoConsoleErrors();
+    }
+
+    private static double Number(string text) => double.Parse(text.Replace('−', '-'), CultureInfo.InvariantCulture);
+}
