@@ -2,25 +2,28 @@ using Seepage.Core.Geometry;
 
 namespace Seepage.Core.Sections;
 
-/// <summary>Reads and checks the cutoff walls: inside the domain, top on its boundary, tip inside it.</summary>
+/// <summary>Reads and checks the cutoff walls: inside the domain, top on its boundary, tip inside it. A cutoff with
+/// a thickness and a conductivity kx is a permeable wall instead, whose tip may also rest on the boundary.</summary>
 internal static class CutoffReader
 {
-    public static List<Cutoff> Read(List<CutoffDocument>? docs, Domain? domain, double tolerance, PointReader reader,
+    public sealed record Walls(List<Cutoff> Cutoffs, List<PermeableWall> Permeable, List<int> PermeableIndex);
+
+    public static Walls Read(List<CutoffDocument>? docs, Domain? domain, double tolerance, double unitFactor, PointReader reader,
         List<SectionProblem> problems)
     {
         var cutoffs = new List<Cutoff>();
-        if (docs is null) return cutoffs;
+        var permeable = new List<PermeableWall>();
+        var permeableIndex = new List<int>();
+        if (docs is null) return new(cutoffs, permeable, permeableIndex);
+        var lines = new List<(Point2 Top, Point2 Tip, int Index)>();
         for (int i = 0; i < docs.Count; i++)
         {
             var c = docs[i]; string at = $"/cutoffs/{i}";
             if (c is null) { problems.Add(new(at, "must be an object.")); continue; }
             var top = reader.Point(c.Top, $"{at}/top");
             var tip = reader.Point(c.Tip, $"{at}/tip");
-            if (c.Thickness is { } t && t > 0)
-            {
-                problems.Add(new($"{at}/thickness", "permeable walls of finite thickness are not supported yet; give no thickness for an impervious wall."));
-                continue;
-            }
+            bool isWall = c.Thickness is not null || c.Kx is not null;
+            if (isWall && !WallData(c, at, problems)) continue;
             if (top is null || tip is null) continue;
             if (top.Value.DistanceTo(tip.Value) <= tolerance * 10) { problems.Add(new($"{at}/tip", "coincides with the top; a cutoff needs a length.")); continue; }
             string name = c.Name ?? $"cutoff {i + 1}";
@@ -30,15 +33,36 @@ internal static class CutoffReader
                 { problems.Add(new(at, "leaves the domain; a cutoff must lie inside the zones.")); continue; }
                 if (domain.DistanceToBoundary(top.Value) > tolerance * 10)
                     problems.Add(new($"{at}/top", "must lie on the boundary of the domain (the ground surface or a structure base)."));
-                if (!domain.StrictlyInside(tip.Value, tolerance * 10))
+                if (!isWall && !domain.StrictlyInside(tip.Value, tolerance * 10))
                     problems.Add(new($"{at}/tip", "reaches the impervious boundary of the domain: the wall closes the flow path. End the tip inside the soil."));
             }
-            cutoffs.Add(new Cutoff(name, top.Value, tip.Value));
+            if (isWall)
+            {
+                permeable.Add(new PermeableWall(name, top.Value, tip.Value, c.Thickness!.Value, c.Kx!.Value * unitFactor));
+                permeableIndex.Add(i);
+            }
+            else cutoffs.Add(new Cutoff(name, top.Value, tip.Value));
+            lines.Add((top.Value, tip.Value, i));
         }
-        for (int i = 0; i < cutoffs.Count; i++)
-            for (int j = i + 1; j < cutoffs.Count; j++)
-                if (PolygonMath.ProperIntersection(cutoffs[i].Top, cutoffs[i].Tip, cutoffs[j].Top, cutoffs[j].Tip, tolerance) is not null)
-                    problems.Add(new($"/cutoffs/{j}", $"crosses cutoff {i}; cutoffs must not cross."));
-        return cutoffs;
+        for (int i = 0; i < lines.Count; i++)
+            for (int j = i + 1; j < lines.Count; j++)
+                if (PolygonMath.ProperIntersection(lines[i].Top, lines[i].Tip, lines[j].Top, lines[j].Tip, tolerance) is not null)
+                    problems.Add(new($"/cutoffs/{lines[j].Index}", $"crosses cutoff {lines[i].Index}; cutoffs must not cross."));
+        return new(cutoffs, permeable, permeableIndex);
+    }
+
+    // A permeable wall needs both a positive thickness (m) and a positive conductivity kx (conductivityUnit).
+    private static bool WallData(CutoffDocument c, string at, List<SectionProblem> problems)
+    {
+        bool ok = true;
+        if (c.Thickness is not { } t)
+        { problems.Add(new($"{at}/thickness", "is required with kx: a permeable wall needs its thickness in metres (give neither for an impervious wall of zero thickness).")); ok = false; }
+        else if (!double.IsFinite(t) || t <= 0)
+        { problems.Add(new($"{at}/thickness", "must be a positive thickness in metres (leave out thickness and kx for an impervious wall of zero thickness).")); ok = false; }
+        if (c.Kx is not { } k)
+        { problems.Add(new($"{at}/kx", "is required with a thickness: a permeable wall needs its hydraulic conductivity (in conductivityUnit); leave out the thickness for an impervious wall.")); ok = false; }
+        else if (!double.IsFinite(k) || k <= 0)
+        { problems.Add(new($"{at}/kx", "must be a positive hydraulic conductivity (in conductivityUnit).")); ok = false; }
+        return ok;
     }
 }

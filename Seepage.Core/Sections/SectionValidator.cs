@@ -58,7 +58,8 @@ public static class SectionValidator
         var drains = ReadPolylines(doc.Drains?.Select(d => (d.Name, d.Along)).ToList(), "/drains", "along", "drain",
             "the drain polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
-        var cutoffs = CutoffReader.Read(doc.Cutoffs, domain, tolerance, reader, problems);
+        var walls = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
+        var cutoffs = walls.Cutoffs;
 
         if (doc.Heads is not null && heads.Count > 0 && drains.Count == 0 && heads.Select(h => h.Total).Distinct().Count() == 1
             && problems.All(p => !p.Pointer.StartsWith("/heads", StringComparison.Ordinal)))
@@ -78,8 +79,14 @@ public static class SectionValidator
         if (problems.Count > 0 || zones is null || exit is null || mesh is null)
             return new ValidationOutcome(null, problems);
 
+        if (walls.Permeable.Count > 0)
+        {
+            (soils, zones) = WallZones.Insert(soils, zones, walls.Permeable, domain!, tolerance, problems, walls.PermeableIndex);
+            if (problems.Count > 0) return new ValidationOutcome(null, problems);
+        }
+
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck };
+            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck, PermeableWalls = walls.Permeable };
         return new ValidationOutcome(model, problems);
     }
 

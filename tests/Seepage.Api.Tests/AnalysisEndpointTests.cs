@@ -82,6 +82,7 @@ public class AnalysisEndpointTests
     [InlineData("/zones/1/soil", "/zones/1/soil", "granite")]
     [InlineData("/heads/0/along", "/heads/0/along", "offBoundary")]
     [InlineData("/cutoffs/0/tip", "/cutoffs/0/tip", "closesPath")]
+    [InlineData("/cutoffs/0/kx", "/cutoffs/0/kx", "wallWithoutK")]
     public async Task Post_InvalidSection_400NamingTheField(string _, string pointer, object change)
     {
         var doc = JsonNode.Parse(DesignExample())!;
@@ -91,10 +92,31 @@ public class AnalysisEndpointTests
             case "/zones/1/soil": doc["zones"]![1]!["soil"] = (string)change; break;
             case "/heads/0/along": doc["heads"]![0]!["along"] = JsonNode.Parse("[[-80,-3],[-12,-3]]"); break;
             case "/cutoffs/0/tip": doc["cutoffs"]![0]!["tip"] = JsonNode.Parse("[-12,-25]"); break;
+            case "/cutoffs/0/kx": doc["cutoffs"]![0]!["thickness"] = 0.6; break;
         }
         using var factory = new SeepageFactory();
         var response = await factory.CreateClient().PostAsync("/api/v1/analyses", Json(doc.ToJsonString()));
         await AssertProblemAt(response, pointer);
+    }
+
+    // A cutoff with a thickness and kx is a permeable wall: accepted, meshed as a zone of its own, and it lets
+    // water through, so the flow exceeds that of the same section with an impervious cutoff.
+    [Fact]
+    public async Task Post_PermeableWall_201AndMoreFlowThanImpervious()
+    {
+        using var factory = new SeepageFactory();
+        var client = factory.CreateClient();
+        var doc = JsonNode.Parse(DesignExample())!;
+        var impervious = await ReadJson(await client.PostAsync("/api/v1/analyses", Json(doc.ToJsonString())));
+        doc["cutoffs"]![0]!["thickness"] = 0.6;
+        doc["cutoffs"]![0]!["kx"] = 1e-6;
+        var post = await client.PostAsync("/api/v1/analyses", Json(doc.ToJsonString()));
+        Assert.Equal(HttpStatusCode.Created, post.StatusCode);
+        var wall = await ReadJson(post);
+        double qWall = wall.GetProperty("flow").GetProperty("perMetre").GetDouble();
+        double qImpervious = impervious.GetProperty("flow").GetProperty("perMetre").GetDouble();
+        Assert.True(qWall > qImpervious, $"wall {qWall}, impervious {qImpervious}");
+        Assert.True(Math.Abs(wall.GetProperty("flow").GetProperty("balance").GetDouble()) < 1e-6);
     }
 
     [Fact]
