@@ -22,6 +22,23 @@ internal sealed class BlockCells(List<ImportProblem> problems)
         return CsvText.Format(value).Trim();
     }
 
+    /// <summary>The cell's yes/no value (true/false, yes/no, 1/0, any case); null when blank, a problem when unreadable.</summary>
+    public bool? Flag(SheetBlock block, int row, string column, string pointer)
+    {
+        object? value = block.Value(row, column);
+        Mark(pointer, block, row, column);
+        if (SheetGrid.IsBlankCell(value)) return null;
+        if (value is bool b) return b;
+        if (value is double d && (d == 0 || d == 1)) return d == 1;
+        switch (CsvText.Format(value).Trim().ToLowerInvariant())
+        {
+            case "true" or "yes" or "1": return true;
+            case "false" or "no" or "0": return false;
+        }
+        problems.Add(new ImportProblem(block.At(row, column), $"'{CsvText.Format(value)}' is not a yes/no value (the '{column}' column takes true or false)."));
+        return null;
+    }
+
     /// <summary>The cell's number; null when blank (a problem when <paramref name="required"/>) or unreadable (a problem).</summary>
     public double? Number(SheetBlock block, int row, string column, string? pointer = null, bool required = false)
     {

@@ -18,9 +18,10 @@ public static class SectionSheetLayout
     public const string Drains = "drains";
     public const string Checks = "checks";
     public const string Mesh = "mesh";
+    public const string Gauges = "gauges";
 
     /// <summary>Block names in the order the templates write them.</summary>
-    public static readonly IReadOnlyList<string> Blocks = [Section, Soils, Zones, Structures, Cutoffs, Heads, Drains, Checks, Mesh];
+    public static readonly IReadOnlyList<string> Blocks = [Section, Soils, Zones, Structures, Cutoffs, Heads, Drains, Checks, Mesh, Gauges];
 
     /// <summary>Blocks every section needs.</summary>
     public static readonly IReadOnlyList<string> RequiredBlocks = [Soils, Zones, Heads];
@@ -28,7 +29,7 @@ public static class SectionSheetLayout
     /// <summary>The columns of each block (canonical names, as in the JSON contract where one exists).</summary>
     public static readonly IReadOnlyDictionary<string, string[]> Columns = new Dictionary<string, string[]>
     {
-        [Section] = ["title", "description", "conductivityUnit", "waterUnitWeight", "structureLength"],
+        [Section] = ["title", "description", "conductivityUnit", "waterUnitWeight", "structureLength", "truncationCheck"],
         [Soils] = ["id", "kx", "ky", "beddingAngle", "specificGravity", "voidRatio", "saturatedUnitWeight", "creepClass"],
         [Zones] = ["zone", "soil", "x", "y", "size"],
         [Structures] = ["name", "x", "y"],
@@ -36,7 +37,8 @@ public static class SectionSheetLayout
         [Heads] = ["name", "total", "x", "y"],
         [Drains] = ["name", "x", "y"],
         [Checks] = ["check", "x", "y", "depth", "requiredFactor"],
-        [Mesh] = ["size", "minAngle"],
+        [Mesh] = ["size", "minAngle", "order", "convergenceCheck"],
+        [Gauges] = ["name", "x", "y"],
     };
 
     /// <summary>Columns a block cannot do without.</summary>
@@ -51,6 +53,7 @@ public static class SectionSheetLayout
         [Drains] = ["name", "x", "y"],
         [Checks] = ["check"],
         [Mesh] = [],
+        [Gauges] = ["name", "x", "y"],
     };
 
     /// <summary>The unit written after a column name in the templates; "k" stands for the section's conductivity unit.</summary>

@@ -39,11 +39,24 @@ public static class SectionSheetReader
             {
                 Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/drains/{i}/along"),
             }).ToList()),
+            Gauges = Any(Of(L.Gauges), bs => Lines(bs, "name", cells).Select((g, i) => new GaugeDocument
+            {
+                Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/gauges/{i}/along"),
+            }).ToList()),
         };
         foreach (var b in Of(L.Checks)) doc = ReadChecks(doc, b, cells);
         foreach (var b in Of(L.Mesh))
             foreach (int r in OneRow(b, problems))
-                doc = doc with { Mesh = new MeshDocument { Size = cells.Number(b, r, "size", "/mesh/size"), MinAngle = cells.Number(b, r, "minAngle", "/mesh/minAngle") } };
+                doc = doc with
+                {
+                    Mesh = new MeshDocument
+                    {
+                        Size = cells.Number(b, r, "size", "/mesh/size"),
+                        MinAngle = cells.Number(b, r, "minAngle", "/mesh/minAngle"),
+                        Order = cells.Number(b, r, "order", "/mesh/order") is { } o ? (int)Math.Round(o) : null,
+                        ConvergenceCheck = cells.Flag(b, r, "convergenceCheck", "/mesh/convergenceCheck"),
+                    },
+                };
         return new SheetImport(problems.Count == 0 ? doc : null, problems, cells.Map);
     }
 
@@ -59,6 +72,7 @@ public static class SectionSheetReader
                 ConductivityUnit = cells.Text(b, r, "conductivityUnit", "/conductivityUnit"),
                 WaterUnitWeight = cells.Number(b, r, "waterUnitWeight", "/waterUnitWeight"),
                 StructureLength = cells.Number(b, r, "structureLength", "/structureLength"),
+                TruncationCheck = cells.Flag(b, r, "truncationCheck", "/truncationCheck"),
             };
         return doc;
     }

@@ -13,7 +13,7 @@ public static class SectionSheetWriter
         var blocks = new List<(string, List<object?[]>)>();
         void Add(string block, IEnumerable<object?[]> rows) => blocks.Add((block, [Header(block, k), .. rows]));
 
-        Add(L.Section, [[d.Title, d.Description, d.ConductivityUnit, d.WaterUnitWeight, d.StructureLength]]);
+        Add(L.Section, [[d.Title, d.Description, d.ConductivityUnit, d.WaterUnitWeight, d.StructureLength, d.TruncationCheck]]);
         if (d.Soils is { } soils)
             Add(L.Soils, soils.Select(s => new object?[] { s.Id, s.Kx, s.Ky, s.BeddingAngle, s.SpecificGravity, s.VoidRatio, s.SaturatedUnitWeight, s.CreepClass }));
         if (d.Zones is { } zones)
@@ -39,7 +39,9 @@ public static class SectionSheetWriter
             if (d.HeaveCheck is { } h) rows.Add(["heave", null, null, null, h.RequiredFactor]);
             Add(L.Checks, rows);
         }
-        if (d.Mesh is { } m) Add(L.Mesh, [[m.Size, m.MinAngle]]);
+        if (d.Mesh is { } m) Add(L.Mesh, [[m.Size, m.MinAngle, m.Order is { } o ? (double)o : null, m.ConvergenceCheck]]);
+        if (d.Gauges is { } gauges)
+            Add(L.Gauges, gauges.SelectMany(g => (g.Along ?? []).Select(p => new object?[] { g.Name, X(p), Y(p) })));
         return blocks;
     }
 

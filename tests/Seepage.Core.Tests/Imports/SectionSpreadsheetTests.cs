@@ -55,6 +55,38 @@ public class SectionSpreadsheetTests
         Assert.True(SameDocument(example, import.Document!), SectionParser.Write(import.Document!));
     }
 
+    // The evidence options travel through both spreadsheet forms too: gauges, element order, the convergence and
+    // truncation checks, and a permeable wall (thickness and kx on a cutoff row).
+    [Fact]
+    public void ReadCsvAndXlsx_GaugesOrderChecksAndWall_GiveTheSameDocument()
+    {
+        var example = Example() with
+        {
+            Gauges = [new GaugeDocument { Name = "below the floor", Along = [[2, 0], [2, -28]] }, new GaugeDocument { Name = "bent", Along = [[20, 0], [25, -5], [25, -12]] }],
+            Mesh = new MeshDocument { Size = 1.5, MinAngle = 28, Order = 2, ConvergenceCheck = true },
+            TruncationCheck = false,
+        };
+        example = example with { Cutoffs = [example.Cutoffs![0] with { Thickness = 0.6, Kx = 1e-7 }, example.Cutoffs[1]] };
+        var csv = SectionSpreadsheet.ReadCsv(SectionSpreadsheet.WriteCsv(example));
+        Assert.True(csv.Problems.Count == 0, Describe(csv.Problems));
+        Assert.True(SameDocument(example, csv.Document!), SectionParser.Write(csv.Document!));
+        using var workbook = new MemoryStream(SectionSpreadsheet.WriteXlsx(example));
+        var xlsx = SectionSpreadsheet.ReadXlsx(workbook);
+        Assert.True(xlsx.Problems.Count == 0, Describe(xlsx.Problems));
+        Assert.True(SameDocument(example, xlsx.Document!), SectionParser.Write(xlsx.Document!));
+        Assert.True(SectionValidator.Validate(xlsx.Document!).IsValid);
+    }
+
+    [Fact]
+    public void ReadCsv_NotAFlag_NamesTheCell()
+    {
+        string csv = HandMade + "\nmesh\nsize,convergenceCheck\n1,maybe\n";
+        var import = SectionSpreadsheet.ReadCsv(csv);
+        var problem = Assert.Single(import.Problems);
+        Assert.Contains("'maybe' is not a yes/no value", problem.Message);
+        Assert.Contains("column B", problem.Location);
+    }
+
     [Fact]
     public void ReadCsv_AllBlocksOnOneSheetWithBlanksAndComments_ReadsEveryBlock()
     {
