@@ -90,8 +90,17 @@ public static class AnalysisFigures
     {
         foreach (var s in section.Structures ?? []) yield return new FigureItem(Line(s.Base), Wall, 3);
         foreach (var c in section.Cutoffs ?? [])
-            if (c.Top is { Length: 2 } && c.Tip is { Length: 2 })
-                yield return new FigureItem([new(c.Top[0], c.Top[1]), new(c.Tip[0], c.Tip[1])], Wall, 3);
+        {
+            if (c.Top is not { Length: 2 } || c.Tip is not { Length: 2 }) continue;
+            if (c.Thickness is > 0 and var t && c.Kx is not null)
+            {
+                // A permeable wall: its strip, outlined and dashed (water passes through it).
+                var wall = new PermeableWall(c.Name ?? "", new(c.Top[0], c.Top[1]), new(c.Tip[0], c.Tip[1]), t, c.Kx.Value);
+                var strip = wall.Strip().Select(p => new FigurePoint(p.X, p.Y)).ToList();
+                yield return new FigureItem([.. strip, strip[0]], Wall, 1.2, Dashed: true);
+            }
+            else yield return new FigureItem([new(c.Top[0], c.Top[1]), new(c.Tip[0], c.Tip[1])], Wall, 3);
+        }
     }
 
     private static List<FigurePoint> Line(List<double[]>? points) =>

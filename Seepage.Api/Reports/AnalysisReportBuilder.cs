@@ -42,7 +42,7 @@ public static class AnalysisReportBuilder
         blocks.AddRange(AnalysisReportExtras.Blocks(r));
         if (r.Warnings.Count > 0) { blocks.Add(new ReportHeading("Warnings")); blocks.Add(new ReportList(r.Warnings)); }
         blocks.Add(new ReportHeading("3. Methods and sources"));
-        blocks.Add(new ReportList(Methods(r)));
+        blocks.Add(new ReportList(Methods(r, section)));
         blocks.Add(new ReportHeading("4. Mesh and solver"));
         blocks.Add(new ReportTable("Mesh and solver statistics", ["Quantity", "Value"],
         [
@@ -80,12 +80,14 @@ public static class AnalysisReportBuilder
         return rows;
     }
 
-    private static List<string> Methods(AnalysisResultDto r)
+    private static List<string> Methods(AnalysisResultDto r, SectionDocument section)
     {
+        string elements = section.Mesh?.Order == 2 ? "quadratic (P2)" : "linear (P1)";
         var list = new List<string>
         {
-            "Steady seepage: div(K grad h) = 0 with the zone's conductivity tensor, solved by the finite element method with linear (P1) " +
-                "triangles on a quality constrained Delaunay mesh; cutoffs are slits with distinct nodes on their two faces.",
+            $"Steady seepage: div(K grad h) = 0 with the zone's conductivity tensor, solved by the finite element method with {elements} " +
+                "triangles on a quality constrained Delaunay mesh; impervious cutoffs are slits with distinct nodes on their two faces, " +
+                "permeable walls are strips meshed as zones of their own conductivity.",
             $"Discharge from the consistent nodal reactions on the fixed-head boundaries; linear solve by {r.Solver.Method}.",
             "Flow lines are level lines of the stream function; equipotentials are level lines of the total head.",
             "Exit gradient: upward gradient averaged over the stated depth below the exit surface; critical gradient i_c = (Gs − 1)/(1 + e) " +

@@ -39,6 +39,25 @@ public class ReportEndpointTests
         Assert.True(Regex.Matches(html, "<svg ").Count >= 4, "four figures: geometry, flow net, uplift, exit gradient");
     }
 
+    // The memo states the element order used and lists a permeable wall with its thickness and conductivity.
+    [Fact]
+    public async Task Report_QuadraticElementsAndWall_StatedInTheMemo()
+    {
+        using var factory = new SeepageFactory();
+        var client = factory.CreateClient();
+        var doc = System.Text.Json.Nodes.JsonNode.Parse(await client.GetStringAsync("/api/v1/examples/twin-pile-weir"))!;
+        doc["mesh"]!["order"] = 2;
+        doc["cutoffs"]![0]!["thickness"] = 0.6;
+        doc["cutoffs"]![0]!["kx"] = 1e-6;
+        var post = await client.PostAsync("/api/v1/analyses", new StringContent(doc.ToJsonString(), Encoding.UTF8, "application/json"));
+        Assert.Equal(HttpStatusCode.Created, post.StatusCode);
+        string id = JsonDocument.Parse(await post.Content.ReadAsStringAsync()).RootElement.GetProperty("id").GetString()!;
+        string html = await client.GetStringAsync($"/api/v1/analyses/{id}/report");
+        Assert.Contains("quadratic (P2)", html);
+        Assert.DoesNotContain("linear (P1)", html);
+        Assert.Matches(@"wall 0\.60* m, kx 1\.000E-06 m/s", html);
+    }
+
     [Fact]
     public async Task Report_Pdf_OpensAndHoldsCautionAndChecksHeadings()
     {
