@@ -55,6 +55,33 @@ public class PermeableWallTests(Xunit.Abstractions.ITestOutputHelper output)
         Assert.True(qWall < qPile);
     }
 
+    // A wall from the end of a floor through a sand layer into the silt below: the strip is cut out of both layers
+    // and meshed as one zone. Flow is conserved, and a wall more pervious than an impervious cutoff and less than
+    // the sand lets through more than the cutoff and less than no wall at all (monotonicity; common practice).
+    [Fact]
+    public void Analysis_WallAcrossLayers_FlowBetweenCutoffAndNone()
+    {
+        SectionDocument With(CutoffDocument? wall) => new()
+        {
+            Soils = [new() { Id = "sand", Kx = 1e-4 }, new() { Id = "silt", Kx = 1e-6 }],
+            Zones = [new() { Soil = "sand", Outline = Rect(-40, -6, 40, 0) }, new() { Soil = "silt", Outline = Rect(-40, -16, 40, -6) }],
+            Structures = [new() { Name = "floor", Base = [P(-5, 0), P(5, 0)] }],
+            Cutoffs = wall is null ? [] : [wall],
+            Heads = [new() { Name = "up", Along = [P(-40, 0), P(-5, 0)], Total = 4 }, new() { Name = "down", Along = [P(5, 0), P(40, 0)], Total = 0 }],
+            Mesh = new() { Size = 0.5 },
+            TruncationCheck = false,
+        };
+        var wallModel = Valid(With(new() { Name = "wall", Top = P(5, 0), Tip = P(5, -9), Thickness = 0.6, Kx = 1e-6 }));
+        Assert.Equal(4, wallModel.Zones.Count); // sand and silt keep their indices; the sand is split in two, the silt notched; the wall is last
+        Assert.Equal("wall (wall)", wallModel.Soils[wallModel.Zones[^1].Soil].Id);
+        var withWall = Seepage.Core.Analysis.Run(wallModel);
+        double qCutoff = Seepage.Core.Analysis.Run(Valid(With(new() { Name = "pile", Top = P(5, 0), Tip = P(5, -9) }))).Flow.PerMetre;
+        double qNone = Seepage.Core.Analysis.Run(Valid(With(null))).Flow.PerMetre;
+        output.WriteLine($"cutoff {qCutoff:E4}, wall {withWall.Flow.PerMetre:E4}, none {qNone:E4}");
+        Assert.True(Math.Abs(withWall.Flow.Balance) < 1e-6);
+        Assert.InRange(withWall.Flow.PerMetre, qCutoff, qNone);
+    }
+
     [Fact]
     public void Validate_WallData_ProblemsNameTheField()
     {
