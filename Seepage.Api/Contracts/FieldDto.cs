@@ -5,6 +5,8 @@ namespace Seepage.Api.Contracts;
 /// (node indices, counter-clockwise), zone index per triangle, total head per node (m), equipotentials at
 /// equal head drops and flow lines bounding equal-flow channels (polylines of [x, y] in m); per triangle, the
 /// head gradient [∂h/∂x, ∂h/∂y] (dimensionless) and the Darcy velocity [vx, vy] = −K∇h (m/s) at its centroid.
+/// <c>zoneSoils</c> names the soil of each zone index: the section's zones first, then any pieces a permeable wall
+/// split off them and the walls themselves.
 /// </summary>
 public sealed record FieldDto(
     string Id,
@@ -17,7 +19,8 @@ public sealed record FieldDto(
     FlowNetDto FlowNet,
     IReadOnlyList<double[][]> Walls,
     double[][] Gradients,
-    double[][] Velocities);
+    double[][] Velocities,
+    IReadOnlyList<string>? ZoneSoils = null);
 
 /// <summary>One equipotential: its total head in m and the polylines where the field takes it.</summary>
 public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Paths);

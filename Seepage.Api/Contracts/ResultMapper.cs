@@ -60,7 +60,8 @@ public static class ResultMapper
             velocities[t] = [Significant(vx), Significant(vy)];
         }
         return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
-            equipotentials, flowLines, counts, walls, gradients, velocities);
+            equipotentials, flowLines, counts, walls, gradients, velocities,
+            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList());
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :

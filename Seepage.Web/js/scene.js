@@ -99,12 +99,13 @@ export class Scene {
     const hit = this.probe?.at(w.x, w.y);
     if (hit) {
       const gammaW = Number.isFinite(this.section.waterUnitWeight) ? this.section.waterUnitWeight : 9.81;
-      const zone = this.section.zones?.[this.field.zones?.[hit.triangle]];
+      const zoneIndex = this.field.zones?.[hit.triangle];
+      const soil = this.field.zoneSoils?.[zoneIndex] ?? this.section.zones?.[zoneIndex]?.soil;
       parts.push(`h = ${fixed(hit.head, 3)} m`,
         `u = γw(h − y) = ${fixed(gammaW * (hit.head - w.y), 1)} kPa`,
         `|i| = ${sig(Math.hypot(hit.gradX, hit.gradY), 3)}`,
         `i up = ${sig(-hit.gradY, 3)}`);
-      if (zone?.soil) parts.push(`soil ${zone.soil}`);
+      if (soil) parts.push(`soil ${soil}`);
     } else if (this.probe) {
       parts.push('outside the mesh');
     }
