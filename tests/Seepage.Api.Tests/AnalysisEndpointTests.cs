@@ -117,6 +117,12 @@ public class AnalysisEndpointTests
         double qImpervious = impervious.GetProperty("flow").GetProperty("perMetre").GetDouble();
         Assert.True(qWall > qImpervious, $"wall {qWall}, impervious {qImpervious}");
         Assert.True(Math.Abs(wall.GetProperty("flow").GetProperty("balance").GetDouble()) < 1e-6);
+        // The field names the soil of every zone index its triangles use, the wall's own soil last.
+        var field = await ReadJson(await client.GetAsync($"/api/v1/analyses/{wall.GetProperty("id").GetString()}/field"));
+        var zoneSoils = field.GetProperty("zoneSoils").EnumerateArray().Select(z => z.GetString()).ToList();
+        Assert.Equal("upstream pile (wall)", zoneSoils[^1]);
+        Assert.All(field.GetProperty("zones").EnumerateArray(), z => Assert.InRange(z.GetInt32(), 0, zoneSoils.Count - 1));
+        Assert.Contains(field.GetProperty("zones").EnumerateArray(), z => z.GetInt32() == zoneSoils.Count - 1);
     }
 
     [Fact]
