@@ -19,7 +19,7 @@ svg { font-family: "DejaVu Sans", system-ui, sans-serif; }
 .structure-base { fill: none; stroke: #37342f; stroke-width: 2.5; }
 .wall-casing { fill: none; stroke: #ffffff; stroke-width: 7; stroke-linecap: round; }
 .wall { fill: none; stroke: #111111; stroke-width: 4; stroke-linecap: round; }
-.wall-thick { fill: #7a6f66; stroke: #111; stroke-width: 1.5; }
+.wall-thick { fill: #7a6f66; fill-opacity: 0.45; stroke: #111; stroke-width: 1.5; stroke-dasharray: 5 3; }
 .head-boundary { fill: none; stroke: #1f6fd1; stroke-width: 5; stroke-linecap: butt; }
 .water-level { fill: none; stroke: #1f6fd1; stroke-width: 1.5; stroke-dasharray: 7 4; }
 .drain { fill: none; stroke: #0f8a7e; stroke-width: 5; stroke-dasharray: 3 3; }

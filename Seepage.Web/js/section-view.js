@@ -71,9 +71,11 @@ export function drawFeatures(features, labels, section, bounds) {
   for (const c of arr(section.cutoffs)) {
     if (!isPoint(c.top) || !isPoint(c.tip)) continue;
     const line = [c.top, c.tip];
-    if (c.thickness > 0) {
-      const t = c.thickness / 2;
-      features.append(svg('path', { class: 'wall-thick', d: pathData([[c.top[0] - t, c.top[1]], [c.top[0] + t, c.top[1]], [c.tip[0] + t, c.tip[1]], [c.tip[0] - t, c.tip[1]]], true) }));
+    const length = Math.hypot(c.tip[0] - c.top[0], c.tip[1] - c.top[1]);
+    if (c.thickness > 0 && length > 0) {
+      // A permeable wall: the strip of its thickness centred on the line from top to tip, at any inclination.
+      const nx = -(c.tip[1] - c.top[1]) / length * c.thickness / 2, ny = (c.tip[0] - c.top[0]) / length * c.thickness / 2;
+      features.append(svg('path', { class: 'wall-thick', d: pathData([[c.top[0] - nx, c.top[1] - ny], [c.tip[0] - nx, c.tip[1] - ny], [c.tip[0] + nx, c.tip[1] + ny], [c.top[0] + nx, c.top[1] + ny]], true) }));
     } else {
       features.append(svg('path', { class: 'wall-casing', d: pathData(line) }), svg('path', { class: 'wall', d: pathData(line) }));
     }

@@ -47,5 +47,30 @@ public sealed class EvidenceTests(BrowserFixture fixture)
         session.AssertNoConsoleErrors();
     }
 
+    // A permeable wall is drawn as its strip and hovering over it names the wall's own soil.
+    [Fact]
+    public async Task Picture_PermeableWall_DrawnAsStripWithItsSoilInTheReadout()
+    {
+        await using var session = await PageSession.OpenAsync(fixture);
+        await session.LoadDemoAsync();
+        var page = session.Page;
+        var firstId = await page.GetAttributeAsync("#figures", "data-analysis-id");
+        var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
+        section["cutoffs"]![1]!["thickness"] = 3.0;
+        section["cutoffs"]![1]!["kx"] = 1e-6;
+        await page.FillAsync("#editor", section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+        await page.ClickAsync("#run");
+        await page.WaitForFunctionAsync($"() => document.querySelector('#figures')?.dataset.analysisId !== '{firstId}' && document.body.dataset.runState === 'done'",
+            null, new() { Timeout = 60_000 });
+        var strip = page.Locator("#picture path.wall-thick");
+        Assert.Equal(1, await strip.CountAsync());
+        var box = await strip.BoundingBoxAsync();
+        Assert.NotNull(box);
+        Assert.True(box!.Width > 4 && box.Height > box.Width, $"strip {box.Width} × {box.Height} px");
+        await page.Mouse.MoveAsync(box.X + box.Width * 0.5f, box.Y + box.Height * 0.6f);
+        Assert.Contains("soil downstream pile (wall)", await page.Locator("#probe").InnerTextAsync());
+        session.AssertNoConsoleErrors();
+    }
+
     private static double Number(string text) => double.Parse(text.Replace('−', '-'), CultureInfo.InvariantCulture);
 }
