@@ -23,7 +23,7 @@ internal static class CutoffReader
             var top = reader.Point(c.Top, $"{at}/top");
             var tip = reader.Point(c.Tip, $"{at}/tip");
             bool isWall = c.Thickness is not null || c.Kx is not null;
-            if (isWall && !WallData(c, at, problems)) continue;
+            if (isWall && !WallData(c, at, unitFactor, problems)) continue;
             if (top is null || tip is null) continue;
             if (top.Value.DistanceTo(tip.Value) <= tolerance * 10) { problems.Add(new($"{at}/tip", "coincides with the top; a cutoff needs a length.")); continue; }
             string name = c.Name ?? $"cutoff {i + 1}";
@@ -52,7 +52,7 @@ internal static class CutoffReader
     }
 
     // A permeable wall needs both a positive thickness (m) and a positive conductivity kx (conductivityUnit).
-    private static bool WallData(CutoffDocument c, string at, List<SectionProblem> problems)
+    private static bool WallData(CutoffDocument c, string at, double unitFactor, List<SectionProblem> problems)
     {
         bool ok = true;
         if (c.Thickness is not { } t)
@@ -63,6 +63,7 @@ internal static class CutoffReader
         { problems.Add(new($"{at}/kx", "is required with a thickness: a permeable wall needs its hydraulic conductivity (in conductivityUnit); leave out the thickness for an impervious wall.")); ok = false; }
         else if (!double.IsFinite(k) || k <= 0)
         { problems.Add(new($"{at}/kx", "must be a positive hydraulic conductivity (in conductivityUnit).")); ok = false; }
+        else if (ConductivityUnits.OutOfRange(k * unitFactor) is { } why) { problems.Add(new($"{at}/kx", why)); ok = false; }
         return ok;
     }
 }

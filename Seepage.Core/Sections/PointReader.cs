@@ -5,11 +5,17 @@ namespace Seepage.Core.Sections;
 /// <summary>Reads [x, y] pairs and polylines from a document, recording problems with their pointers.</summary>
 internal sealed class PointReader(List<SectionProblem> problems)
 {
+    /// <summary>Largest coordinate magnitude accepted, m: sections are local (a few km at most), and beyond this the
+    /// geometric tolerances lose their meaning.</summary>
+    public const double LargestCoordinate = 1e6;
+
     public Point2? Point(double[]? pair, string pointer)
     {
         if (pair is null) { problems.Add(new(pointer, "is required: a point [x, y] in metres.")); return null; }
         if (pair.Length != 2) { problems.Add(new(pointer, $"must be a point [x, y] with 2 numbers, not {pair.Length}.")); return null; }
         if (!double.IsFinite(pair[0]) || !double.IsFinite(pair[1])) { problems.Add(new(pointer, "coordinates must be finite numbers.")); return null; }
+        if (Math.Abs(pair[0]) > LargestCoordinate || Math.Abs(pair[1]) > LargestCoordinate)
+        { problems.Add(new(pointer, "coordinates must lie within ±1,000,000 m; use local section coordinates.")); return null; }
         return new Point2(pair[0], pair[1]);
     }
 

@@ -30,13 +30,13 @@ public static class SectionValidator
             problems.Add(new("/conductivityUnit", $"'{unit}' is not a known unit; use one of {string.Join(", ", ConductivityUnits.ToMetresPerSecond.Keys)}."));
 
         double gammaW = doc.WaterUnitWeight ?? 9.81;
-        if (!double.IsFinite(gammaW) || gammaW <= 0)
-            problems.Add(new("/waterUnitWeight", "must be a positive number (kN/m³)."));
+        if (!double.IsFinite(gammaW) || gammaW < 5 || gammaW > 15)
+            problems.Add(new("/waterUnitWeight", "must lie between 5 and 15 kN/m³ (fresh water 9.81, sea water about 10.05)."));
 
         var soils = ReadSoils(doc.Soils, unitFactor, problems);
         var zones = ReadZones(doc.Zones, soils, reader, problems, warnings);
-        int vertexCount = (doc.Zones?.Sum(z => z.Outline?.Count ?? 0) ?? 0) + (doc.Heads?.Sum(h => h.Along?.Count ?? 0) ?? 0)
-            + (doc.Drains?.Sum(h => h.Along?.Count ?? 0) ?? 0) + (doc.Structures?.Sum(s => s.Base?.Count ?? 0) ?? 0)
+        int vertexCount = (doc.Zones?.Sum(z => z?.Outline?.Count ?? 0) ?? 0) + (doc.Heads?.Sum(h => h?.Along?.Count ?? 0) ?? 0)
+            + (doc.Drains?.Sum(h => h?.Along?.Count ?? 0) ?? 0) + (doc.Structures?.Sum(s => s?.Base?.Count ?? 0) ?? 0)
             + 2 * (doc.Cutoffs?.Count ?? 0);
         if (vertexCount > MaxVertices)
             problems.Add(new("", $"has {vertexCount} vertices; at most {MaxVertices} are accepted."));
@@ -51,11 +51,14 @@ public static class SectionValidator
             ZoneTilingCheck.Check(domain, tolerance, problems);
         }
 
-        var structures = ReadPolylines(doc.Structures?.Select(s => (s.Name, s.Base)).ToList(), "/structures", "base", "structure",
+        NullItems(doc.Structures, "/structures", problems);
+        NullItems(doc.Heads, "/heads", problems);
+        NullItems(doc.Drains, "/drains", problems);
+        var structures = ReadPolylines(doc.Structures?.Select(s => (s?.Name, s?.Base)).ToList(), "/structures", "base", "structure",
             "the base polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new Structure(x.Name, x.Line!)).ToList();
         var heads = ReadHeads(doc.Heads, domain, tolerance, reader, problems);
-        var drains = ReadPolylines(doc.Drains?.Select(d => (d.Name, d.Along)).ToList(), "/drains", "along", "drain",
+        var drains = ReadPolylines(doc.Drains?.Select(d => (d?.Name, d?.Along)).ToList(), "/drains", "along", "drain",
             "the drain polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
         var walls = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
@@ -104,8 +107,10 @@ public static class SectionValidator
             double kx = s.Kx ?? double.NaN;
             if (s.Kx is null) problems.Add(new($"{at}/kx", "is required: hydraulic conductivity along the bedding."));
             else if (!double.IsFinite(kx) || kx <= 0) problems.Add(new($"{at}/kx", "must be a positive, finite conductivity."));
+            else if (ConductivityUnits.OutOfRange(kx * unitFactor) is { } why) problems.Add(new($"{at}/kx", why));
             double ky = s.Ky ?? kx;
             if (s.Ky is { } kyv && (!double.IsFinite(kyv) || kyv <= 0)) problems.Add(new($"{at}/ky", "must be a positive, finite conductivity."));
+            else if (s.Ky is { } kyr && ConductivityUnits.OutOfRange(kyr * unitFactor) is { } whyY) problems.Add(new($"{at}/ky", whyY));
             double angle = s.BeddingAngle ?? 0;
             if (!double.IsFinite(angle) || Math.Abs(angle) > 90) problems.Add(new($"{at}/beddingAngle", "must be an angle in degrees between -90 and 90."));
             if (s.SpecificGravity is { } gs && (!double.IsFinite(gs) || gs <= 1 || gs > 5)) problems.Add(new($"{at}/specificGravity", "must lie between 1 and 5."));
@@ -178,8 +183,11 @@ public static class SectionValidator
         var heads = new List<HeadBoundary>();
         for (int i = 0; i < docs.Count; i++)
         {
+            if (docs[i] is null) continue; // reported by NullItems
             if (docs[i].Total is not { } total || !double.IsFinite(total))
                 problems.Add(new($"/heads/{i}/total", "is required: the total head in metres."));
+            else if (Math.Abs(total) > PointReader.LargestCoordinate)
+                problems.Add(new($"/heads/{i}/total", "must lie within ±1,000,000 m of total head."));
             else if (lines[i].Line is { } line)
                 heads.Add(new HeadBoundary(lines[i].Name, line, total));
         }
@@ -228,6 +236,13 @@ public static class SectionValidator
         int order = doc?.Order ?? 1;
         if (order is not (1 or 2)) problems.Add(new("/mesh/order", "must be 1 (linear triangles) or 2 (quadratic triangles)."));
         return new MeshSettings(size, minAngle) { Order = order, ConvergenceCheck = doc?.ConvergenceCheck ?? false };
+    }
+
+    // An array item that is null is reported once, at the item.
+    private static void NullItems<T>(List<T>? items, string collection, List<SectionProblem> problems) where T : class
+    {
+        for (int i = 0; i < (items?.Count ?? 0); i++)
+            if (items![i] is null) problems.Add(new($"{collection}/{i}", "must be an object."));
     }
 
     private static List<Gauge> ReadGauges(List<GaugeDocument>? docs, PointReader reader, List<SectionProblem> problems)

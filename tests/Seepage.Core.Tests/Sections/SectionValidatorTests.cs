@@ -26,6 +26,27 @@ public class SectionValidatorTests
         Assert.Equal(1e-7, model.Soils[1].Ky); // ky defaults to kx
     }
 
+    // Values outside what any soil, water or local section can be are refused at the member, not carried into the
+    // numerics: conductivity outside 1e-16 … 100 m/s (the soil range of Freeze & Cherry, "Groundwater", 1979,
+    // table 2.2, recalled from memory, with a margin), unit weight of water outside 5 … 15 kN/m³, coordinates and
+    // heads beyond ±1e6 m, and null items in a list (common practice).
+    [Fact]
+    public void Validate_OutOfRangeValuesAndNullItems_NameTheMember()
+    {
+        var doc = SheetPile(5, 10, 40, 4);
+        AssertProblemAt(doc with { Soils = [doc.Soils![0] with { Kx = 1e300 }] }, "/soils/0/kx");
+        AssertProblemAt(doc with { Soils = [doc.Soils![0] with { Kx = 1e-3, Ky = 1e-20 }] }, "/soils/0/ky");
+        AssertProblemAt(doc with { ConductivityUnit = "cm/s", Soils = [doc.Soils![0] with { Kx = 2e4 }] }, "/soils/0/kx"); // 200 m/s
+        Assert.Empty(Problems(doc with { ConductivityUnit = "cm/s", Soils = [doc.Soils![0] with { Kx = 5 }] })); // 0.05 m/s: gravel
+        AssertProblemAt(doc with { WaterUnitWeight = 1e300 }, "/waterUnitWeight");
+        AssertProblemAt(doc with { Heads = [doc.Heads![0] with { Total = 1e300 }, doc.Heads[1]] }, "/heads/0/total");
+        AssertProblemAt(doc with { Cutoffs = [doc.Cutoffs![0] with { Tip = P(0, -2e6) }] }, "/cutoffs/0/tip");
+        AssertProblemAt(doc with { Heads = [doc.Heads![0], null!] }, "/heads/1");
+        AssertProblemAt(doc with { Structures = [null!] }, "/structures/0");
+        AssertProblemAt(doc with { Zones = [doc.Zones![0], null!] }, "/zones/1");
+        AssertProblemAt(doc with { Cutoffs = [doc.Cutoffs![0] with { Thickness = 0.5, Kx = 1e300 }] }, "/cutoffs/0/kx");
+    }
+
     [Fact]
     public void Validate_UnknownSoil_NamesZoneSoil() =>
         AssertProblemAt(SheetPile(3, 6, 30, 4) with { Zones = [new ZoneDocument { Soil = "gravel", Outline = Rect(-30, -6, 30, 0) }] }, "/zones/0/soil");
