@@ -12,6 +12,10 @@ namespace Seepage.Core.Results;
 /// </summary>
 public static class StreamFunctionSolver
 {
+    /// <summary>Relative residual of the ψ solve. ψ only places the drawn flow lines (the discharge comes from the
+    /// head solve's reactions), so 1e-7 is ample: the lines move by far less than a line width.</summary>
+    public const double StreamTolerance = 1e-7;
+
     public static double[]? Solve(HeadField field, MeshBoundary boundary, SparsityPattern pattern, bool[] fixedHead,
         List<string> warnings, CancellationToken cancellation)
     {
@@ -69,7 +73,7 @@ public static class StreamFunctionSolver
         var full = GlobalAssembler.Assemble(mesh, pattern, tensors);
         var system = LinearSystem.Condense(full, new FixedHeads(onBoundary, psi));
         var x = new double[system.Matrix.Size];
-        if (x.Length > 0) LinearSolver.Solve(system.Matrix, system.Rhs, x, new SolverOptions { RelativeTolerance = 1e-9 }, cancellation);
+        if (x.Length > 0) LinearSolver.Solve(system.Matrix, system.Rhs, x, new SolverOptions { RelativeTolerance = StreamTolerance }, cancellation);
         return system.Expand(x);
     }
 }
