@@ -82,7 +82,7 @@ public static class IndependentVariableCalculator
         else notApplied.Add("mutual interference (a single pile)");
         notApplied.Add(underside.Zip(underside.Skip(1)).All(s => Math.Abs(s.First.Y - s.Second.Y) <= tol)
             ? "slope of the floor (none: the floor is level)"
-            : "slope of the floor: the published slope correction, as recalled, moved the key point away from the finite element head on the sloping floors it was checked on, so it is left out; the FE values beside the method govern");
+            : "slope of the floor: the published slope correction, as recalled, was checked against finite element heads on 1:4 floors; the FE confirmed its sign (higher for a floor falling in the direction of flow) but not its size (about half), so it is left out; the FE values beside the method govern");
         return new IndependentVariableResult(floor.Name, b, h, result, ge, exit?.MaxGradient, exit?.RowGradientAtMax,
             applied, notApplied, resultNotes, Source) { FloorThickness = t };
 
