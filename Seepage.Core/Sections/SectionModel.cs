@@ -39,10 +39,6 @@ public sealed record SectionModel(
     /// Null means "automatically for small models".</summary>
     public bool? TruncationCheck { get; init; }
 
-    /// <summary>Permeable walls (already cut into <see cref="Zones"/> as zones of their own soils, appended after the
-    /// section's zones); kept for reporting.</summary>
-    public IReadOnlyList<PermeableWall> PermeableWalls { get; init; } = [];
-
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }

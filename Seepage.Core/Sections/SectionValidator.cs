@@ -51,14 +51,11 @@ public static class SectionValidator
             ZoneTilingCheck.Check(domain, tolerance, problems);
         }
 
-        NullItems(doc.Structures, "/structures", problems);
-        NullItems(doc.Heads, "/heads", problems);
-        NullItems(doc.Drains, "/drains", problems);
-        var structures = ReadPolylines(doc.Structures?.Select(s => (s?.Name, s?.Base)).ToList(), "/structures", "base", "structure",
+        var structures = ReadPolylines(doc.Structures?.Select(s => s is null ? null : Entry(s.Name, s.Base)).ToList(), "/structures", "base", "structure",
             "the base polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new Structure(x.Name, x.Line!)).ToList();
         var heads = ReadHeads(doc.Heads, domain, tolerance, reader, problems);
-        var drains = ReadPolylines(doc.Drains?.Select(d => (d?.Name, d?.Along)).ToList(), "/drains", "along", "drain",
+        var drains = ReadPolylines(doc.Drains?.Select(d => d is null ? null : Entry(d.Name, d.Along)).ToList(), "/drains", "along", "drain",
             "the drain polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
         var walls = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
@@ -84,12 +81,12 @@ public static class SectionValidator
 
         if (walls.Permeable.Count > 0)
         {
-            (soils, zones) = WallZones.Insert(soils, zones, walls.Permeable, domain!, tolerance, problems, walls.PermeableIndex);
+            (soils, zones) = WallZones.Insert(soils, zones, walls, domain!, tolerance, problems);
             if (problems.Count > 0) return new ValidationOutcome(null, problems);
         }
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck, PermeableWalls = walls.Permeable };
+            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck };
         return new ValidationOutcome(model, problems);
     }
 
@@ -151,8 +148,11 @@ public static class SectionValidator
         return zones;
     }
 
-    // Returns one entry per input item (Line null where it could not be read), so indices stay aligned.
-    private static List<(string Name, List<Point2>? Line)> ReadPolylines(List<(string? Name, List<double[]>? Line)>? docs,
+    private static (string? Name, List<double[]>? Line)? Entry(string? name, List<double[]>? line) => (name, line);
+
+    // Returns one entry per input item (Line null where it could not be read), so indices stay aligned. A null item
+    // (JSON null in the list) is reported once, at the item.
+    private static List<(string Name, List<Point2>? Line)> ReadPolylines(List<(string? Name, List<double[]>? Line)?>? docs,
         string collection, string member, string kind, string what, Domain? domain, double tolerance, PointReader reader,
         List<SectionProblem> problems)
     {
@@ -160,9 +160,15 @@ public static class SectionValidator
         if (docs is null) return result;
         for (int i = 0; i < docs.Count; i++)
         {
+            if (docs[i] is not { } item)
+            {
+                problems.Add(new($"{collection}/{i}", "must be an object."));
+                result.Add(($"{kind} {i + 1}", null));
+                continue;
+            }
             string at = $"{collection}/{i}/{member}";
-            var line = reader.Polyline(docs[i].Line, at, 2, what);
-            result.Add((docs[i].Name ?? $"{kind} {i + 1}", line));
+            var line = reader.Polyline(item.Line, at, 2, what);
+            result.Add((item.Name ?? $"{kind} {i + 1}", line));
             if (line is null) continue;
             if (domain is not null && !domain.PolylineOnBoundary(line, tolerance * 10))
                 problems.Add(new(at, $"does not lie on the boundary of the zones; a {kind} must run along the edge of the domain."));
@@ -178,12 +184,12 @@ public static class SectionValidator
             problems.Add(new("/heads", "at least one fixed total head is required; without one the head field is undetermined."));
             return [];
         }
-        var lines = ReadPolylines(docs.Select(d => (d?.Name, d?.Along)).ToList(), "/heads", "along", "head boundary",
+        var lines = ReadPolylines(docs.Select(d => d is null ? null : Entry(d.Name, d.Along)).ToList(), "/heads", "along", "head boundary",
             "the head polyline", domain, tolerance, reader, problems);
         var heads = new List<HeadBoundary>();
         for (int i = 0; i < docs.Count; i++)
         {
-            if (docs[i] is null) continue; // reported by NullItems
+            if (docs[i] is null) continue; // reported by ReadPolylines
             if (docs[i].Total is not { } total || !double.IsFinite(total))
                 problems.Add(new($"/heads/{i}/total", "is required: the total head in metres."));
             else if (Math.Abs(total) > PointReader.LargestCoordinate)
@@ -236,13 +242,6 @@ public static class SectionValidator
         int order = doc?.Order ?? 1;
         if (order is not (1 or 2)) problems.Add(new("/mesh/order", "must be 1 (linear triangles) or 2 (quadratic triangles)."));
         return new MeshSettings(size, minAngle) { Order = order, ConvergenceCheck = doc?.ConvergenceCheck ?? false };
-    }
-
-    // An array item that is null is reported once, at the item.
-    private static void NullItems<T>(List<T>? items, string collection, List<SectionProblem> problems) where T : class
-    {
-        for (int i = 0; i < (items?.Count ?? 0); i++)
-            if (items![i] is null) problems.Add(new($"{collection}/{i}", "must be an object."));
     }
 
     private static List<Gauge> ReadGauges(List<GaugeDocument>? docs, PointReader reader, List<SectionProblem> problems)

@@ -12,8 +12,9 @@ namespace Seepage.Core.Sections;
 internal static class WallZones
 {
     public static (List<Soil> Soils, List<Zone> Zones) Insert(IReadOnlyList<Soil> soils, IReadOnlyList<Zone> zones,
-        IReadOnlyList<PermeableWall> walls, Domain domain, double tolerance, List<SectionProblem> problems, IReadOnlyList<int> wallIndex)
+        CutoffReader.Walls read, Domain domain, double tolerance, List<SectionProblem> problems)
     {
+        var walls = read.Permeable; var wallIndex = read.PermeableIndex;
         var outSoils = soils.ToList();
         var outZones = new List<Zone>();
         var extra = new List<Zone>();
