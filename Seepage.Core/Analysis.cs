@@ -33,7 +33,7 @@ public static class Analysis
         var exitSoil = ExitSoil(section, sampler, exit);
         var creep = CreepCalculator.Compute(section, exitSoil);
         var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
-        var gauges = GaugeCalculator.Compute(section, sampler, reactions, solution.FixedHeads.IsFixed);
+        var gauges = GaugeCalculator.Compute(section, sampler, reactions, fixedHeads.IsFixed);
         var convergence = section.Mesh.ConvergenceCheck
             ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
         var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles

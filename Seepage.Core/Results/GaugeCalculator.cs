@@ -18,11 +18,11 @@ public static class GaugeCalculator
     {
         var list = new List<GaugeFlow>();
         if (section.Gauges.Count == 0) return list;
-        var regions = new GaugeRegions(sampler.Field.Mesh);
+        var regions = new GaugeRegions(sampler.Field);
         foreach (var g in section.Gauges)
         {
             var (line, length) = GaugeLineIntegral.Compute(sampler, g.Along);
-            double? parted = regions.Flow(g.Along, reactions, isFixed, sampler.Field.Quadratic);
+            double? parted = regions.Flow(g.Along, reactions, isFixed);
             list.Add(new GaugeFlow(g.Name, parted ?? line, length, parted is null ? AlongLine : Conservative, line));
         }
         return list;

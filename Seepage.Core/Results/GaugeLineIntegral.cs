@@ -1,4 +1,5 @@
 using Seepage.Core.Geometry;
+using Seepage.Core.Meshing;
 
 namespace Seepage.Core.Results;
 
@@ -27,20 +28,12 @@ public static class GaugeLineIntegral
 
     private static (double Flow, double Length) Segment(FieldSampler sampler, Point2 p, Point2 q)
     {
-        var field = sampler.Field; var mesh = field.Mesh; var tri = mesh.Triangles;
+        var field = sampler.Field;
         var dir = q - p;
         double len = dir.Length;
         var normal = new Point2(-dir.Y / len, dir.X / len);
         var cuts = new List<double> { 0, 1 };
-        double minX = Math.Min(p.X, q.X), maxX = Math.Max(p.X, q.X), minY = Math.Min(p.Y, q.Y), maxY = Math.Max(p.Y, q.Y);
-        for (int t = 0; t < mesh.TriangleCount; t++)
-        {
-            int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-            if (Math.Max(mesh.X[a], Math.Max(mesh.X[b], mesh.X[c])) < minX || Math.Min(mesh.X[a], Math.Min(mesh.X[b], mesh.X[c])) > maxX
-                || Math.Max(mesh.Y[a], Math.Max(mesh.Y[b], mesh.Y[c])) < minY || Math.Min(mesh.Y[a], Math.Min(mesh.Y[b], mesh.Y[c])) > maxY)
-                continue;
-            if (Clip(p, dir, Node(a), Node(b), Node(c)) is { } range) { cuts.Add(range.T0); cuts.Add(range.T1); }
-        }
+        foreach (var (_, t0, t1) in Clipped(field.Mesh, p, q)) { cuts.Add(t0); cuts.Add(t1); }
         cuts.Sort();
         double flow = 0, inside = 0;
         double g = 0.5 / Math.Sqrt(3);
@@ -62,12 +55,28 @@ public static class GaugeLineIntegral
             inside += piece;
         }
         return (flow, inside);
+    }
 
-        Point2 Node(int n) => new(mesh.X[n], mesh.Y[n]);
+    /// <summary>Every triangle the segment pq meets, with the parameter range [T0, T1] of p + t·(q − p) inside it
+    /// (boxes are compared first, so only triangles near the segment are clipped).</summary>
+    internal static IEnumerable<(int Triangle, double T0, double T1)> Clipped(Mesh mesh, Point2 p, Point2 q)
+    {
+        var tri = mesh.Triangles; var x = mesh.X; var y = mesh.Y;
+        var dir = q - p;
+        double minX = Math.Min(p.X, q.X), maxX = Math.Max(p.X, q.X), minY = Math.Min(p.Y, q.Y), maxY = Math.Max(p.Y, q.Y);
+        for (int t = 0; t < mesh.TriangleCount; t++)
+        {
+            int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
+            if (Math.Max(x[a], Math.Max(x[b], x[c])) < minX || Math.Min(x[a], Math.Min(x[b], x[c])) > maxX
+                || Math.Max(y[a], Math.Max(y[b], y[c])) < minY || Math.Min(y[a], Math.Min(y[b], y[c])) > maxY)
+                continue;
+            if (Clip(p, dir, new Point2(x[a], y[a]), new Point2(x[b], y[b]), new Point2(x[c], y[c])) is { } range)
+                yield return (t, range.T0, range.T1);
+        }
     }
 
     // The parameter range [T0, T1] of p + t·dir (0 ≤ t ≤ 1) inside triangle abc (Cyrus–Beck clipping), or null.
-    internal static (double T0, double T1)? Clip(Point2 p, Point2 dir, Point2 a, Point2 b, Point2 c)
+    private static (double T0, double T1)? Clip(Point2 p, Point2 dir, Point2 a, Point2 b, Point2 c)
     {
         if (Cross(b - a, c - a) < 0) (b, c) = (c, b);
         double t0 = 0, t1 = 1;

@@ -17,12 +17,14 @@ namespace Seepage.Core.Results;
 /// </summary>
 public sealed class GaugeRegions
 {
+    private readonly HeadField _field;
     private readonly Mesh _mesh;
     private readonly int[] _neighbours; // three per triangle, −1 on the boundary
 
-    public GaugeRegions(Mesh mesh)
+    public GaugeRegions(HeadField field)
     {
-        _mesh = mesh;
+        _field = field;
+        var mesh = _mesh = field.Mesh;
         var tri = mesh.Triangles;
         _neighbours = new int[3 * mesh.TriangleCount];
         Array.Fill(_neighbours, -1);
@@ -43,9 +45,9 @@ public sealed class GaugeRegions
 
     /// <summary>The flow (m³/s per m) toward the left normal of the walking direction, or null when the polyline does
     /// not part the section. <paramref name="reactions"/> holds K h at fixed unknowns and zero elsewhere.</summary>
-    public double? Flow(IReadOnlyList<Point2> along, double[] reactions, bool[] isFixed, QuadraticDofs? quadratic)
+    public double? Flow(IReadOnlyList<Point2> along, double[] reactions, bool[] isFixed)
     {
-        var mesh = _mesh; var tri = mesh.Triangles;
+        var mesh = _mesh; var tri = mesh.Triangles; var quadratic = _field.Quadratic;
         int nt = mesh.TriangleCount;
         var crossed = Crossed(along);
         if (!crossed.Contains(true)) return null;
@@ -80,13 +82,13 @@ public sealed class GaugeRegions
         var right = new sbyte[count]; // 0 unknown, 1 right, 2 left
         int perTriangle = quadratic is null ? 3 : 6;
         for (int t = 0; t < nt; t++)
-            for (int k = 0; k < perTriangle; k++)
-            {
-                int dof = quadratic is null ? tri[3 * t + k] : quadratic.Elements[6 * t + k];
-                if (crossed[t]) right[dof] = SideOf(along, Position(dof, quadratic)) ? (sbyte)1 : (sbyte)2;
-                else if (right[dof] == 0 && sides[piece[t]] != 0) right[dof] = (sbyte)(sides[piece[t]] == 1 ? 1 : 2);
-            }
-        // Crossed triangles win over pieces: set them again last.
+            if (!crossed[t] && sides[piece[t]] != 0)
+                for (int k = 0; k < perTriangle; k++)
+                {
+                    int dof = quadratic is null ? tri[3 * t + k] : quadratic.Elements[6 * t + k];
+                    if (right[dof] == 0) right[dof] = (sbyte)(sides[piece[t]] == 1 ? 1 : 2);
+                }
+        // Crossed triangles win over pieces: set last.
         for (int t = 0; t < nt; t++)
             if (crossed[t])
                 for (int k = 0; k < perTriangle; k++)
@@ -109,37 +111,23 @@ public sealed class GaugeRegions
 
     private bool[] Crossed(IReadOnlyList<Point2> along)
     {
-        var mesh = _mesh; var tri = mesh.Triangles; var x = mesh.X; var y = mesh.Y;
-        var crossed = new bool[mesh.TriangleCount];
+        var crossed = new bool[_mesh.TriangleCount];
         for (int s = 0; s + 1 < along.Count; s++)
         {
-            Point2 p = along[s], q = along[s + 1], dir = q - p;
-            double minX = Math.Min(p.X, q.X), maxX = Math.Max(p.X, q.X), minY = Math.Min(p.Y, q.Y), maxY = Math.Max(p.Y, q.Y);
-            for (int t = 0; t < mesh.TriangleCount; t++)
-            {
-                if (crossed[t]) continue;
-                int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-                if (Math.Max(x[a], Math.Max(x[b], x[c])) < minX || Math.Min(x[a], Math.Min(x[b], x[c])) > maxX
-                    || Math.Max(y[a], Math.Max(y[b], y[c])) < minY || Math.Min(y[a], Math.Min(y[b], y[c])) > maxY)
-                    continue;
-                var range = GaugeLineIntegral.Clip(p, dir, new Point2(x[a], y[a]), new Point2(x[b], y[b]), new Point2(x[c], y[c]));
+            Point2 p = along[s], dir = along[s + 1] - p;
+            foreach (var (t, t0, t1) in GaugeLineIntegral.Clipped(_mesh, p, along[s + 1]))
                 // Crossed only when the polyline runs through the inside, not when it touches a vertex or an edge end.
-                if (range is { } r && r.T1 - r.T0 > 1e-9 && InsideAt(t, p + (0.5 * (r.T0 + r.T1)) * dir)) crossed[t] = true;
-            }
+                if (!crossed[t] && t1 - t0 > 1e-9 && StrictlyInside(t, p + (0.5 * (t0 + t1)) * dir)) crossed[t] = true;
         }
         return crossed;
     }
 
     // Whether p lies strictly inside triangle t (not on an edge).
-    private bool InsideAt(int t, Point2 p)
+    private bool StrictlyInside(int t, Point2 p)
     {
-        var tri = _mesh.Triangles; var x = _mesh.X; var y = _mesh.Y;
-        int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-        double d = (x[b] - x[a]) * (y[c] - y[a]) - (x[c] - x[a]) * (y[b] - y[a]);
-        double l1 = ((p.X - x[a]) * (y[c] - y[a]) - (x[c] - x[a]) * (p.Y - y[a])) / d;
-        double l2 = ((x[b] - x[a]) * (p.Y - y[a]) - (p.X - x[a]) * (y[b] - y[a])) / d;
+        var (l0, l1, l2) = _field.Barycentric(t, p);
         const double eps = 1e-12;
-        return l1 > eps && l2 > eps && 1 - l1 - l2 > eps;
+        return l0 > eps && l1 > eps && l2 > eps;
     }
 
     private Point2 Centroid(int t)
