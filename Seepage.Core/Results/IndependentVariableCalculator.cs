@@ -64,10 +64,10 @@ public static class IndependentVariableCalculator
         var last = piles[^1];
         double? ge = downX - last.Top.X <= tol ? IndependentVariableMethod.ExitGradient(h, b, (ground ?? last.Top.Y) - last.Tip.Y) : null;
         if (ge is null) notes.Add("Independent variables: no cutoff at the downstream end of the floor; G_E is not defined (the exit gradient at a floor's toe without a cutoff is singular).");
-        double bottom = section.Zones.SelectMany(z => z.Outline).Min(p => p.Y);
+        double soilBelow = underside.Min(p => p.Y) - section.Zones.SelectMany(z => z.Outline).Min(p => p.Y);
         var resultNotes = new List<string>
         {
-            FormattableString.Invariant($"The method assumes a foundation of infinite depth; this section has {underside.Min(p => p.Y) - bottom:0.##} m of soil below the floor ({(underside.Min(p => p.Y) - bottom) / b:0.##} times the floor length b = {b:0.##} m)."),
+            FormattableString.Invariant($"The method assumes a foundation of infinite depth; this section has {soilBelow:0.##} m of soil below the floor ({soilBelow / b:0.##} times the floor length b = {b:0.##} m)."),
             "Pressures in per cent of H above the lowest fixed head; FE values are the computed heads just beside each key point.",
         };
         if (section.Zones.Select(z => z.Soil).Distinct().Count() > 1 || section.Soils.Any(s => Math.Abs(s.Kx - s.Ky) > 1e-12 * s.Kx))
