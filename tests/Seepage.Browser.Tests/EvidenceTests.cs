@@ -14,17 +14,12 @@ public sealed class EvidenceTests(BrowserFixture fixture)
         await using var session = await PageSession.OpenAsync(fixture);
         await session.LoadDemoAsync();
         var page = session.Page;
-        var firstId = await page.GetAttributeAsync("#figures", "data-analysis-id");
-
         // The demo floor with a gauge from its middle down to the impervious base, and the truncation check on.
-        var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
-        section["gauges"] = JsonNode.Parse("""[{ "name": "below the floor", "along": [[2, 0], [2, -28]] }]""");
-        section["truncationCheck"] = true;
-        await page.FillAsync("#editor", section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
-        await page.ClickAsync("#run");
-        await page.WaitForFunctionAsync($"() => document.querySelector('#figures')?.dataset.analysisId !== '{firstId}' && document.body.dataset.runState === 'done'",
-            null, new() { Timeout = 60_000 });
-        var id = await page.GetAttributeAsync("#figures", "data-analysis-id");
+        var id = await session.RunEditedAsync(section =>
+        {
+            section["gauges"] = JsonNode.Parse("""[{ "name": "below the floor", "along": [[2, 0], [2, -28]] }]""");
+            section["truncationCheck"] = true;
+        });
         using var client = new HttpClient { BaseAddress = fixture.Api.BaseAddress };
         using var result = JsonDocument.Parse(await client.GetStringAsync($"api/v1/analyses/{id}"));
         var root = result.RootElement;
@@ -54,14 +49,11 @@ public sealed class EvidenceTests(BrowserFixture fixture)
         await using var session = await PageSession.OpenAsync(fixture);
         await session.LoadDemoAsync();
         var page = session.Page;
-        var firstId = await page.GetAttributeAsync("#figures", "data-analysis-id");
-        var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
-        section["cutoffs"]![1]!["thickness"] = 3.0;
-        section["cutoffs"]![1]!["kx"] = 1e-6;
-        await page.FillAsync("#editor", section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
-        await page.ClickAsync("#run");
-        await page.WaitForFunctionAsync($"() => document.querySelector('#figures')?.dataset.analysisId !== '{firstId}' && document.body.dataset.runState === 'done'",
-            null, new() { Timeout = 60_000 });
+        await session.RunEditedAsync(section =>
+        {
+            section["cutoffs"]![1]!["thickness"] = 3.0;
+            section["cutoffs"]![1]!["kx"] = 1e-6;
+        });
         var strip = page.Locator("#picture path.wall-thick");
         Assert.Equal(1, await strip.CountAsync());
         var box = await strip.BoundingBoxAsync();

@@ -1,3 +1,5 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
 using Microsoft.Playwright;
 
 namespace Seepage.Browser.Tests;
@@ -47,6 +49,20 @@ public sealed class PageSession : IAsyncDisposable
             var alert = await Page.Locator("#alert").InnerTextAsync();
             Assert.Fail($"The demo analysis did not finish: {alert}");
         }
+    }
+
+    /// <summary>Changes the section in the editor, runs it and waits (at most 60 s) until the figures show the new
+    /// analysis; returns its id.</summary>
+    public async Task<string> RunEditedAsync(Action<JsonNode> edit)
+    {
+        var before = await Page.GetAttributeAsync("#figures", "data-analysis-id");
+        var section = JsonNode.Parse(await Page.InputValueAsync("#editor"))!;
+        edit(section);
+        await Page.FillAsync("#editor", section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+        await Page.ClickAsync("#run");
+        await Page.WaitForFunctionAsync($"() => document.querySelector('#figures')?.dataset.analysisId !== '{before}' && document.body.dataset.runState === 'done'",
+            null, new() { Timeout = 60_000 });
+        return (await Page.GetAttributeAsync("#figures", "data-analysis-id"))!;
     }
 
     /// <summary>Saves a full-page screenshot as TestResults/screenshots/{name}.png.</summary>

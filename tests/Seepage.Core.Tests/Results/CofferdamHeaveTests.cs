@@ -24,15 +24,7 @@ public class CofferdamHeaveTests
             TruncationCheck = false,
         };
         var result = Seepage.Core.Analysis.Run(Valid(doc));
-        Assert.Equal(2, result.Heave.Count);
-        var left = result.Heave.Single(h => h.Cutoff == "left wall");
-        var right = result.Heave.Single(h => h.Cutoff == "right wall");
-        Assert.Equal(6, left.Depth, 1e-6);
-        Assert.Equal(0, left.SurfaceY, 1e-6);
-        Assert.Equal(-5, left.PrismFromX, 1e-9);
-        Assert.Equal(-2, left.PrismToX, 1e-9);
-        Assert.Equal(2, right.PrismFromX, 1e-9);
-        Assert.Equal(5, right.PrismToX, 1e-9);
+        var (left, right) = ExcavationSidePrisms(result, surfaceY: 0);
         Assert.True(left.AverageExcessHead > 0 && Math.Abs(left.AverageExcessHead / right.AverageExcessHead - 1) < 1e-3, "symmetric section, equal prisms");
         // W′ = γw·(Gs − 1)/(1 + e)·D·D/2 = 9.81·1.65/1.6·18 kN/m.
         Assert.Equal(9.81 * 1.65 / 1.6 * 18, left.EffectiveWeight!.Value, 1e-9);
@@ -60,15 +52,7 @@ public class CofferdamHeaveTests
             TruncationCheck = false,
         };
         var result = Seepage.Core.Analysis.Run(Valid(doc));
-        Assert.Equal(2, result.Heave.Count);
-        var left = result.Heave.Single(h => h.Cutoff == "left wall");
-        var right = result.Heave.Single(h => h.Cutoff == "right wall");
-        Assert.Equal(6, left.Depth, 1e-6);
-        Assert.Equal(-3, left.SurfaceY, 1e-6);
-        Assert.Equal(-5, left.PrismFromX, 1e-9);
-        Assert.Equal(-2, left.PrismToX, 1e-9);
-        Assert.Equal(2, right.PrismFromX, 1e-9);
-        Assert.Equal(5, right.PrismToX, 1e-9);
+        var (left, right) = ExcavationSidePrisms(result, surfaceY: -3);
         Assert.True(left.AverageExcessHead > 0 && left.AverageExcessHead < 7 && Math.Abs(left.AverageExcessHead / right.AverageExcessHead - 1) < 1e-3,
             $"excess head {left.AverageExcessHead:F4} m of the 7 m difference; right {right.AverageExcessHead:F4} m");
         Assert.Equal((20 - 9.81) * 18, left.EffectiveWeight!.Value, 1e-9);
@@ -77,5 +61,21 @@ public class CofferdamHeaveTests
         Assert.Equal(-3, exit.AtY, 1e-6);
         Assert.Equal((20 - 9.81) / 9.81, exit.CriticalGradient!.Value, 1e-12);
         Assert.True(Math.Abs(result.Flow.Balance) < 1e-6);
+    }
+
+    // Both walls at x = ±5 m reach 6 m below the surface inside the cofferdam: each prism is D = 6 m deep, D/2 = 3 m
+    // wide, on the excavation side of its wall, topped by that surface.
+    private static (Seepage.Core.Results.HeaveResult Left, Seepage.Core.Results.HeaveResult Right) ExcavationSidePrisms(AnalysisResult result, double surfaceY)
+    {
+        Assert.Equal(2, result.Heave.Count);
+        var left = result.Heave.Single(h => h.Cutoff == "left wall");
+        var right = result.Heave.Single(h => h.Cutoff == "right wall");
+        Assert.Equal(6, left.Depth, 1e-6);
+        Assert.Equal(surfaceY, left.SurfaceY, 1e-6);
+        Assert.Equal(-5, left.PrismFromX, 1e-9);
+        Assert.Equal(-2, left.PrismToX, 1e-9);
+        Assert.Equal(2, right.PrismFromX, 1e-9);
+        Assert.Equal(5, right.PrismToX, 1e-9);
+        return (left, right);
     }
 }
