@@ -18,6 +18,9 @@ if ! ls /usr/share/fonts/truetype/dejavu/DejaVuSans.ttf /usr/share/fonts/truetyp
     || { echo "Could not install fonts-dejavu-core; the PDF report tests will fail." >&2; }
 fi
 
+# The clone must build on its own: no project may reference a file outside the repository.
+./tools/check-repo-paths.sh || { echo "0 passed, 1 failed"; exit 1; }
+
 log=$(mktemp)
 dotnet test Seepage.sln -c Release 2>&1 | tee "$log"
 status=${PIPESTATUS[0]}

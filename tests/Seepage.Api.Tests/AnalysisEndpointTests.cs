@@ -45,16 +45,19 @@ public class AnalysisEndpointTests
     [Fact]
     public async Task Get_AfterRestartOnSameDatabase_StillThere()
     {
-        string id, path;
-        using (var first = new SeepageFactory())
+        string id, path = Path.Combine(Path.GetTempPath(), $"seepage-test-{Guid.NewGuid():N}.db");
+        try
         {
-            path = first.DatabasePath;
-            var post = await first.CreateClient().PostAsync("/api/v1/analyses", Json(DesignExample()));
-            id = (await ReadJson(post)).GetProperty("id").GetString()!;
+            using (var first = new SeepageFactory(path))
+            {
+                var post = await first.CreateClient().PostAsync("/api/v1/analyses", Json(DesignExample()));
+                id = (await ReadJson(post)).GetProperty("id").GetString()!;
+            }
+            using var second = new SeepageFactory(path);
+            var get = await second.CreateClient().GetAsync($"/api/v1/analyses/{id}");
+            Assert.Equal(HttpStatusCode.OK, get.StatusCode);
         }
-        using var second = new SeepageFactory(path);
-        var get = await second.CreateClient().GetAsync($"/api/v1/analyses/{id}");
-        Assert.Equal(HttpStatusCode.OK, get.StatusCode);
+        finally { SeepageFactory.DeleteDatabase(path); }
     }
 
     [Fact]

@@ -29,7 +29,7 @@ public static class SolveBenchmark
         int baselineRepeats = int.Parse(Option(args, "--baseline-repeats", "3"), CultureInfo.InvariantCulture);
         bool verbose = args.Contains("--verbose");
         string source = Option(args, "--source", "generator");
-        string sectionPath = Option(args, "--section", "/work/shared/design-example.section.json");
+        string sectionPath = Option(args, "--section", Path.Combine(AppContext.BaseDirectory, "design-example.section.json"));
         var inv = CultureInfo.InvariantCulture;
         int largest = sizes.Max();
         WarmUp();
