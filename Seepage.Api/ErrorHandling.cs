@@ -1,27 +1,27 @@
-using Microsoft.AspNetCore.Diagnostics;
+using Seepage.Api.Errors;
 
 namespace Seepage.Api;
 
-/// <summary>Turns exceptions that escape an endpoint into RFC 9457 problem details: request-reading failures
-/// (malformed or oversize bodies) are the client's (400/413), anything else a server fault (500).</summary>
+/// <summary>Exceptions that escape an endpoint become RFC 9457 problem details (<see cref="ProblemExceptionHandler"/>);
+/// bare status codes (405, a route that does not exist) get a problem body too.</summary>
 public static class ErrorHandling
 {
+    public static IServiceCollection AddSeepageErrorHandling(this IServiceCollection services)
+    {
+        services.AddProblemDetails(o => o.CustomizeProblemDetails = c =>
+        {
+            // Routing refuses a body type an operation does not declare before any endpoint runs; say which type.
+            if (c.ProblemDetails.Status == StatusCodes.Status415UnsupportedMediaType && c.ProblemDetails.Detail is null)
+                c.ProblemDetails.Detail = $"'{RequestBody.MediaType(c.HttpContext.Request.ContentType)}' is not a type " +
+                    "this endpoint reads; the OpenAPI document (/swagger/v1/swagger.json) lists each operation's types.";
+        });
+        services.AddExceptionHandler<ProblemExceptionHandler>();
+        return services;
+    }
+
     public static void UseSeepageErrorHandling(this WebApplication app)
     {
-        app.UseExceptionHandler(handler => handler.Run(async context =>
-        {
-            var error = context.Features.Get<IExceptionHandlerFeature>()?.Error;
-            var (status, title) = error switch
-            {
-                BadHttpRequestException { StatusCode: 413 } => (413, "The body is too large."),
-                BadHttpRequestException bad => (bad.StatusCode, "The request could not be read."),
-                OperationCanceledException => (499, "The request was cancelled."),
-                _ => (500, "The analysis failed unexpectedly."),
-            };
-            if (status == 500) app.Logger.LogError(error, "Unhandled error");
-            context.Response.StatusCode = status;
-            await Results.Problem(statusCode: status, title: title, detail: status == 500 ? null : error?.Message).ExecuteAsync(context);
-        }));
+        app.UseExceptionHandler();
         app.UseStatusCodePages();
     }
 }

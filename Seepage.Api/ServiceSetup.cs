@@ -18,7 +18,7 @@ public static class ServiceSetup
         services.AddSingleton(new StudyStore(path));
         services.AddSingleton<StudyService>();
         services.AddSingleton<ExampleCatalog>();
-        services.AddProblemDetails();
+        services.AddSeepageErrorHandling();
         services.ConfigureHttpJsonOptions(o => o.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);
         return services;
     }

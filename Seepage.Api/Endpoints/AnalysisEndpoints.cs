@@ -1,9 +1,8 @@
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
-using Seepage.Core.Meshing;
+using Seepage.Api.Errors;
 using Seepage.Core.Sections;
-using Seepage.Core.Solvers;
 
 namespace Seepage.Api.Endpoints;
 
@@ -47,26 +46,10 @@ public static class AnalysisEndpoints
         HttpRequest request, AnalysisService service, CancellationToken cancellation)
     {
         var body = await SectionBody.ReadAsync(request, cancellation);
-        if (body.TooLarge) return SectionProblems.TooLarge();
-        if (body.Model is null || body.Problems.Count > 0) return SectionProblems.Invalid(body);
-        try
-        {
-            var dto = await service.RunAsync(body.Model, body.Json!, cancellation);
-            return TypedResults.Created($"/api/v1/analyses/{dto.Id}", dto);
-        }
-        catch (MeshingException ex)
-        {
-            return TypedResults.ValidationProblem(new Dictionary<string, string[]> { [""] = [ex.Message] },
-                title: "The section could not be meshed.", detail: ex.Message);
-        }
-        catch (SolverNotConvergedException ex)
-        {
-            return TypedResults.Problem(statusCode: StatusCodes.Status422UnprocessableEntity, title: "The linear solve did not converge.",
-                detail: ex.Message, extensions: new Dictionary<string, object?>
-                {
-                    ["iterations"] = ex.Iterations, ["residual"] = ex.Residual, ["tolerance"] = ex.Tolerance,
-                });
-        }
+        if (body.Refusal is { } refused) return refused;
+        if (body.Invalid is { } invalid) return invalid;
+        var dto = await service.RunAsync(body.Model!, body.Json!, cancellation);
+        return TypedResults.Created($"/api/v1/analyses/{dto.Id}", dto);
     }
 
     public static async Task<Results<Ok<AnalysisResultDto>, ProblemHttpResult>> Get(string id, AnalysisService service,
@@ -84,6 +67,5 @@ public static class AnalysisEndpoints
         await store.GetJsonAsync(id, AnalysisPart.Section, cancellation) is { } json
             ? TypedResults.Content(json, "application/json") : NotFound(id);
 
-    private static ProblemHttpResult NotFound(string id) =>
-        TypedResults.Problem(statusCode: StatusCodes.Status404NotFound, title: "No such analysis.", detail: $"No analysis has the id '{id}'.");
+    private static ProblemHttpResult NotFound(string id) => ApiProblems.NotFound("analysis", id);
 }

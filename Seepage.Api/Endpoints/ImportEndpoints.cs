@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Errors;
 using Seepage.Core.Imports;
 using Seepage.Core.Sections;
 
@@ -17,7 +18,7 @@ public static class ImportEndpoints
                 "(section, soils, zone vertices, structures, cutoffs, heads, drains, checks, mesh; see the templates) and validates it. " +
                 "Answers 200 with the section document, ready to post to /api/v1/analyses, or 400 problem details whose errors are " +
                 "keyed by the cell concerned, e.g. \"sheet 'soils' row 4 column B\".")
-            .Accepts<string>(SpreadsheetBody.Csv, SpreadsheetBody.Xlsx, "multipart/form-data")
+            .Accepts<string>(RequestBody.Csv, RequestBody.Xlsx, RequestBody.Multipart)
             .Produces<SectionDocument>(StatusCodes.Status200OK, "application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
@@ -25,12 +26,12 @@ public static class ImportEndpoints
             .WithName("GetSectionTemplateXlsx")
             .WithSummary("Download the section template as an .xlsx workbook")
             .WithDescription("The example section (an invented weir) filled in, one sheet per block, with a notes sheet.")
-            .Produces(StatusCodes.Status200OK, contentType: SpreadsheetBody.Xlsx);
+            .Produces(StatusCodes.Status200OK, contentType: RequestBody.Xlsx);
         group.MapGet("/template.csv", (ExampleCatalog catalog) => Template(catalog, xlsx: false))
             .WithName("GetSectionTemplateCsv")
             .WithSummary("Download the section template as CSV")
             .WithDescription("The example section (an invented weir) filled in, all blocks on one sheet separated by blank rows.")
-            .Produces(StatusCodes.Status200OK, contentType: SpreadsheetBody.Csv);
+            .Produces(StatusCodes.Status200OK, contentType: RequestBody.Csv);
         return app;
     }
 
@@ -38,8 +39,8 @@ public static class ImportEndpoints
         CancellationToken cancellation)
     {
         var body = await SpreadsheetBody.ReadAsync(request, cancellation);
-        if (body.Import is not { } import)
-            return TypedResults.Problem(statusCode: body.Status, title: "The spreadsheet could not be taken.", detail: body.Error);
+        if (body.Refusal is { } refused) return refused;
+        var import = body.Import!;
         if (import.Document is null) return Invalid(import.Problems, "The spreadsheet has cells that could not be read.");
         var outcome = SectionValidator.Validate(import.Document);
         if (!outcome.IsValid) return Invalid(import.Place(outcome.Problems), "The section in the spreadsheet has problems.");
@@ -50,14 +51,12 @@ public static class ImportEndpoints
     {
         var doc = catalog.Document(ExampleCatalog.DefaultName);
         return xlsx
-            ? TypedResults.File(SectionSpreadsheet.WriteXlsx(doc), SpreadsheetBody.Xlsx, "seepage-section.xlsx")
-            : TypedResults.File(System.Text.Encoding.UTF8.GetBytes(SectionSpreadsheet.WriteCsv(doc)), SpreadsheetBody.Csv + "; charset=utf-8",
+            ? TypedResults.File(SectionSpreadsheet.WriteXlsx(doc), RequestBody.Xlsx, "seepage-section.xlsx")
+            : TypedResults.File(System.Text.Encoding.UTF8.GetBytes(SectionSpreadsheet.WriteCsv(doc)), RequestBody.Csv + "; charset=utf-8",
                 "seepage-section.csv");
     }
 
     private static ValidationProblem Invalid(IReadOnlyList<ImportProblem> problems, string title) =>
-        TypedResults.ValidationProblem(
-            problems.GroupBy(p => p.Location).ToDictionary(g => g.Key, g => g.Select(p => p.Message).ToArray()),
-            title: title,
-            detail: $"{problems.Count} problem(s) found; each is listed under the cell concerned (sheet, row, column).");
+        ApiProblems.Invalid(ApiProblems.Errors(problems), title,
+            $"{problems.Count} problem(s) found; each is listed under the cell concerned (sheet, row, column).");
 }

@@ -1,5 +1,6 @@
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
+using Seepage.Api.Errors;
 using Seepage.Api.Reports;
 using Seepage.Api.Storage;
 using Seepage.Core.Sections;
@@ -50,28 +51,28 @@ public static class ReportEndpoints
         return app;
     }
 
-    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult>> AnalysisReport(string id, string? format,
+    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult>> AnalysisReport(string id, string? format,
         AnalysisService service, AnalysisStore store, CancellationToken cancellation)
     {
-        if (Format(format) is { } bad) return bad;
+        var (chosen, badFormat) = QueryChoice.ReportFormat.Read(format);
+        if (badFormat is not null) return badFormat;
         var result = await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation);
         var field = await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation);
         var sectionJson = await store.GetJsonAsync(id, AnalysisPart.Section, cancellation);
         if (result is null || field is null || sectionJson is null) return NotFound("analysis", id);
         var section = SectionParser.Parse(sectionJson, out _) ?? new SectionDocument();
-        return Render(AnalysisReportBuilder.Build(result, field, section, DateTimeOffset.UtcNow), format, $"seepage-{id}.pdf");
+        return Render(AnalysisReportBuilder.Build(result, field, section, DateTimeOffset.UtcNow), chosen, $"seepage-{id}.pdf");
     }
 
-    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult>> StudyReport(string id, string? format,
+    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult>> StudyReport(string id, string? format,
         string? figure, StudyService service, CancellationToken cancellation)
     {
-        if (Format(format) is { } bad) return bad;
-        figure ??= "flow";
-        if (!StudyReportBuilder.Figures.ContainsKey(figure))
-            return TypedResults.Problem(statusCode: StatusCodes.Status400BadRequest, title: "Unknown figure.",
-                detail: $"'{figure}' is not a figure; use one of {string.Join(", ", StudyReportBuilder.Figures.Keys)}.");
+        var (chosen, badFormat) = QueryChoice.ReportFormat.Read(format);
+        if (badFormat is not null) return badFormat;
+        var (chart, badFigure) = StudyFigure.Read(figure);
+        if (badFigure is not null) return badFigure;
         if (await service.GetAsync(id, cancellation) is not { } study) return NotFound("study", id);
-        return Render(StudyReportBuilder.Build(study, figure, DateTimeOffset.UtcNow), format, $"seepage-{id}.pdf");
+        return Render(StudyReportBuilder.Build(study, chart, DateTimeOffset.UtcNow), chosen, $"seepage-{id}.pdf");
     }
 
     public static async Task<Results<ContentHttpResult, ProblemHttpResult>> UpliftCsv(string id, AnalysisService service, CancellationToken cancellation) =>
@@ -82,20 +83,20 @@ public static class ReportEndpoints
         await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
             ? TypedResults.Content(StationCsv.Exit(r), Csv) : NotFound("analysis", id);
 
-    private static Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult> Render(ReportDocument report, string? format, string fileName)
+    private static Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult> Render(
+        ReportDocument report, string format, string fileName)
     {
-        if (!string.Equals(format, "pdf", StringComparison.OrdinalIgnoreCase)) return TypedResults.Content(HtmlReportWriter.Write(report), Html);
+        if (format != "pdf") return TypedResults.Content(HtmlReportWriter.Write(report), Html);
         if (!ReportFonts.Available)
             return TypedResults.Problem(statusCode: StatusCodes.Status503ServiceUnavailable, title: "PDF reports are unavailable on this server.",
                 detail: "No TrueType font was found (install the Debian package fonts-dejavu-core); the HTML report works.");
         return TypedResults.File(PdfReportWriter.Write(report), Pdf, fileName);
     }
 
-    private static ProblemHttpResult? Format(string? format) =>
-        format is null || format.Equals("html", StringComparison.OrdinalIgnoreCase) || format.Equals("pdf", StringComparison.OrdinalIgnoreCase) ? null
-            : TypedResults.Problem(statusCode: StatusCodes.Status400BadRequest, title: "Unknown report format.",
-                detail: $"'{format}' is not a report format; use html (default) or pdf.");
+    /// <summary>The figure charted by a study report: one of <see cref="StudyReportBuilder.Figures"/>, default flow.</summary>
+    public static readonly QueryChoice StudyFigure = new("figure", "flow", [.. StudyReportBuilder.Figures.Keys],
+        "The figure charted against the first varied member: flow (m³/s per m, default), upliftForce (kN/m), " +
+        "exitGradient or exitFactor.");
 
-    private static ProblemHttpResult NotFound(string kind, string id) =>
-        TypedResults.Problem(statusCode: StatusCodes.Status404NotFound, title: $"No such {kind}.", detail: $"No {kind} has the id '{id}'.");
+    private static ProblemHttpResult NotFound(string kind, string id) => ApiProblems.NotFound(kind, id);
 }

@@ -1,37 +1,36 @@
-using System.Text;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Errors;
 using Seepage.Core.Sections;
 
 namespace Seepage.Api.Endpoints;
 
-/// <summary>Reads a section document from a request body: size limit, JSON parse, validation.</summary>
+/// <summary>Reads a section document from a request body (<see cref="RequestBody"/>: JSON only, size-bounded),
+/// parses and validates it.</summary>
 public static class SectionBody
 {
-    /// <summary>Largest accepted body, bytes (4 MiB).</summary>
-    public const int MaxBytes = 4 * 1024 * 1024;
+    /// <summary>Largest accepted body, bytes; the same limit as every other body.</summary>
+    public const int MaxBytes = RequestBody.MaxBytes;
 
-    public sealed record Outcome(SectionModel? Model, string? Json, IReadOnlyList<SectionProblem> Problems, bool TooLarge);
+    /// <summary>The validated model and the JSON as posted; or the refusal of the body (413, 415); or the problems.</summary>
+    public sealed record Outcome(SectionModel? Model, string? Json, IReadOnlyList<SectionProblem> Problems,
+        ProblemHttpResult? Refusal)
+    {
+        /// <summary>400 listing the problems when the section is not valid, else null.</summary>
+        public ValidationProblem? Invalid =>
+            Refusal is null && (Model is null || Problems.Count > 0) ? ApiProblems.InvalidSection(Problems) : null;
+    }
 
     public static async Task<Outcome> ReadAsync(HttpRequest request, CancellationToken cancellation)
     {
-        if (request.ContentLength > MaxBytes) return new Outcome(null, null, [], true);
-        using var buffer = new MemoryStream();
-        var chunk = new byte[81920];
-        int read;
-        while ((read = await request.Body.ReadAsync(chunk, cancellation)) > 0)
-        {
-            buffer.Write(chunk, 0, read);
-            if (buffer.Length > MaxBytes) return new Outcome(null, null, [], true);
-        }
-        string json = Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
+        var body = await RequestBody.ReadAsync(request, "Section documents", [RequestBody.Json], cancellation);
+        if (body.Refusal is { } refusal) return new Outcome(null, null, [], refusal);
+        string json = body.Text;
         if (string.IsNullOrWhiteSpace(json))
-            return new Outcome(null, json, [new SectionProblem("", "The body is empty; post a section document (JSON object).")], false);
+            return new Outcome(null, json, [new SectionProblem("", "The body is empty; post a section document (JSON object).")],
+                null);
         var document = SectionParser.Parse(json, out var parseProblems);
-        if (document is null) return new Outcome(null, json, parseProblems, false);
+        if (document is null) return new Outcome(null, json, parseProblems, null);
         var outcome = SectionValidator.Validate(document);
-        return new Outcome(outcome.Model, json, outcome.Problems, false);
+        return new Outcome(outcome.Model, json, outcome.Problems, null);
     }
-
-    /// <summary>Problems grouped by JSON pointer, the shape of the problem details' <c>errors</c> member.</summary>
-    public static Dictionary<string, string[]> ToErrors(IEnumerable<SectionProblem> problems) =>
-        problems.GroupBy(p => p.Pointer).ToDictionary(g => g.Key, g => g.Select(p => p.Message).ToArray());
 }

@@ -24,8 +24,8 @@ public static class SectionEndpoints
         CancellationToken cancellation)
     {
         var body = await SectionBody.ReadAsync(request, cancellation);
-        if (body.TooLarge) return SectionProblems.TooLarge();
-        if (body.Model is null || body.Problems.Count > 0) return SectionProblems.Invalid(body);
-        return TypedResults.Ok(new SectionCheckDto(true, body.Model.Warnings));
+        if (body.Refusal is { } refused) return refused;
+        if (body.Invalid is { } invalid) return invalid;
+        return TypedResults.Ok(new SectionCheckDto(true, body.Model!.Warnings));
     }
 }

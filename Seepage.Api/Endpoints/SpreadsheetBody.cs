@@ -1,66 +1,56 @@
+using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Errors;
 using Seepage.Core.Imports;
 
 namespace Seepage.Api.Endpoints;
 
 /// <summary>Reads a spreadsheet from a request body: CSV text (<c>text/csv</c>), an .xlsx workbook, or the first file of a
-/// multipart form (CSV or .xlsx by its name or type). Bounded to <see cref="SectionBody.MaxBytes"/>.</summary>
+/// multipart form (CSV or .xlsx by its name or type). Type and size are checked by <see cref="RequestBody"/>.</summary>
 public static class SpreadsheetBody
 {
-    public const string Xlsx = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
-    public const string Csv = "text/csv";
+    /// <summary>The types the import reads.</summary>
+    public static readonly string[] Accepted = [RequestBody.Csv, RequestBody.Xlsx, RequestBody.Multipart];
 
-    /// <summary>The import (null when the body could not be taken), or why not: status and message.</summary>
-    public sealed record Outcome(SheetImport? Import, int Status, string? Error);
+    /// <summary>The import, or the problem that refused the body (400, 413, 415).</summary>
+    public sealed record Outcome(SheetImport? Import, ProblemHttpResult? Refusal);
 
     public static async Task<Outcome> ReadAsync(HttpRequest request, CancellationToken cancellation)
     {
-        if (request.ContentLength > SectionBody.MaxBytes) return TooLarge();
-        string type = (request.ContentType ?? "").Split(';')[0].Trim().ToLowerInvariant();
-        Stream source = request.Body;
-        if (request.HasFormContentType)
+        const string what = "Spreadsheets";
+        if (!request.HasFormContentType)
         {
-            var form = await request.ReadFormAsync(cancellation);
-            var file = form.Files.FirstOrDefault();
-            if (file is null) return Bad(StatusCodes.Status400BadRequest, "The form holds no file; attach the spreadsheet (.csv or .xlsx) as a file field.");
-            if (file.Length > SectionBody.MaxBytes) return TooLarge();
-            type = file.FileName.EndsWith(".xlsx", StringComparison.OrdinalIgnoreCase) ? Xlsx
-                : file.FileName.EndsWith(".csv", StringComparison.OrdinalIgnoreCase) ? Csv
-                : (file.ContentType ?? "").Split(';')[0].Trim().ToLowerInvariant();
-            source = file.OpenReadStream();
+            var body = await RequestBody.ReadAsync(request, what, Accepted, cancellation);
+            if (body.Refusal is { } refusal) return new(null, refusal);
+            return Read(body.Bytes, body.MediaType);
         }
-        bool csv = type is Csv or "application/csv" or "text/plain";
-        if (!csv && type != Xlsx)
-            return Bad(StatusCodes.Status415UnsupportedMediaType,
-                $"'{type}' is not a spreadsheet type this endpoint reads; send {Csv}, {Xlsx}, or a multipart form with a .csv or .xlsx file.");
-        var bytes = await ReadBoundedAsync(source, cancellation);
-        if (bytes is null) return TooLarge();
-        if (bytes.Length == 0) return Bad(StatusCodes.Status400BadRequest, "The body is empty; send a spreadsheet.");
-        if (csv) return new Outcome(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes)), 200, null);
+        if (request.ContentLength > RequestBody.MaxBytes) return new(null, ApiProblems.TooLarge(what));
+        var form = await request.ReadFormAsync(cancellation);
+        var file = form.Files.FirstOrDefault();
+        if (file is null)
+            return new(null, ApiProblems.Unreadable("The form holds no file; attach the spreadsheet (.csv or .xlsx) as a file field."));
+        if (file.Length > RequestBody.MaxBytes) return new(null, ApiProblems.TooLarge(what));
+        string type = file.FileName.EndsWith(".xlsx", StringComparison.OrdinalIgnoreCase) ? RequestBody.Xlsx
+            : file.FileName.EndsWith(".csv", StringComparison.OrdinalIgnoreCase) ? RequestBody.Csv
+            : RequestBody.MediaType(file.ContentType);
+        if (type is not (RequestBody.Csv or RequestBody.Xlsx))
+            return new(null, ApiProblems.UnsupportedType(type, [".csv or .xlsx file in the form", RequestBody.Csv, RequestBody.Xlsx]));
+        await using var source = file.OpenReadStream();
+        var bytes = await RequestBody.ReadBoundedAsync(source, cancellation);
+        return bytes is null ? new(null, ApiProblems.TooLarge(what)) : Read(bytes, type);
+    }
+
+    private static Outcome Read(byte[] bytes, string type)
+    {
+        if (bytes.Length == 0) return new(null, ApiProblems.Unreadable("The body is empty; send a spreadsheet."));
+        if (type == RequestBody.Csv) return new(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes)), null);
         try
         {
             using var workbook = new MemoryStream(bytes);
-            return new Outcome(SectionSpreadsheet.ReadXlsx(workbook), 200, null);
+            return new(SectionSpreadsheet.ReadXlsx(workbook), null);
         }
         catch (InvalidDataException ex)
         {
-            return Bad(StatusCodes.Status400BadRequest, ex.Message);
+            return new(null, ApiProblems.Unreadable(ex.Message));
         }
     }
-
-    private static async Task<byte[]?> ReadBoundedAsync(Stream source, CancellationToken cancellation)
-    {
-        using var buffer = new MemoryStream();
-        var chunk = new byte[81920];
-        int read;
-        while ((read = await source.ReadAsync(chunk, cancellation)) > 0)
-        {
-            buffer.Write(chunk, 0, read);
-            if (buffer.Length > SectionBody.MaxBytes) return null;
-        }
-        return buffer.ToArray();
-    }
-
-    private static Outcome TooLarge() => Bad(StatusCodes.Status413PayloadTooLarge, $"Spreadsheets are limited to {SectionBody.MaxBytes / (1024 * 1024)} MiB.");
-
-    private static Outcome Bad(int status, string message) => new(null, status, message);
 }

@@ -1,6 +1,7 @@
-using System.Text;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Errors;
 using Seepage.Api.Storage;
 using Seepage.Core.Imports;
 using Seepage.Core.Sections;
@@ -12,21 +13,22 @@ namespace Seepage.Api.Endpoints;
 /// <c>?base=</c> (an analysis id or an example name). Problems are keyed by JSON pointer (JSON) or cell (CSV).</summary>
 public static class StudyBody
 {
-    public sealed record Outcome(JsonObject? Base, IReadOnlyList<StudyAlternative> Alternatives, Dictionary<string, string[]> Errors,
-        bool TooLarge);
+    /// <summary>The base and alternatives with their problems; or the refusal of the body (413, 415).</summary>
+    public sealed record Outcome(JsonObject? Base, IReadOnlyList<StudyAlternative> Alternatives,
+        Dictionary<string, string[]> Errors, ProblemHttpResult? Refusal = null);
 
     public static async Task<Outcome> ReadAsync(HttpRequest request, string? baseName, AnalysisStore store, ExampleCatalog catalog,
         CancellationToken cancellation)
     {
-        var body = await ReadTextAsync(request, cancellation);
-        if (body is null) return new Outcome(null, [], [], true);
+        var read = await RequestBody.ReadAsync(request, "Studies", [RequestBody.Json, RequestBody.Csv], cancellation);
+        if (read.Refusal is { } refusal) return new Outcome(null, [], [], refusal);
+        string body = read.Text;
         var errors = new Dictionary<string, string[]>();
-        string type = (request.ContentType ?? "").Split(';')[0].Trim().ToLowerInvariant();
-        if (type is "text/csv" or "application/csv")
+        if (read.MediaType == RequestBody.Csv)
         {
             var problems = new List<ImportProblem>();
             var alternatives = StudyCsv.Read(body, problems);
-            foreach (var g in problems.GroupBy(p => p.Location)) errors[g.Key] = g.Select(p => p.Message).ToArray();
+            foreach (var (key, messages) in ApiProblems.Errors(problems)) errors[key] = messages;
             string? json = baseName is null ? null
                 : await store.GetJsonAsync(baseName, AnalysisPart.Section, cancellation) ?? catalog.Json(baseName);
             if (json is null)
@@ -38,8 +40,8 @@ public static class StudyBody
         }
         JsonNode? root;
         try { root = JsonNode.Parse(body, documentOptions: new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true }); }
-        catch (JsonException ex) { errors[""] = ["Malformed JSON: " + ex.Message]; return new Outcome(null, [], errors, false); }
-        if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors, false); }
+        catch (JsonException ex) { errors[""] = ["Malformed JSON: " + ex.Message]; return new Outcome(null, [], errors); }
+        if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors); }
         JsonObject? section = obj["base"] is JsonObject b ? CheckBase(b.ToJsonString(), "/base", errors) : null;
         if (obj["base"] is not JsonObject) errors["/base"] = ["must be the base section document (a JSON object)."];
         var list = new List<StudyAlternative>();
@@ -64,7 +66,7 @@ public static class StudyBody
             errors["/alternatives"] = ["The study has no alternatives."];
         if (alternatives.Count > StudyService.MaxAlternatives)
             errors["/alternatives"] = [$"has {alternatives.Count} alternatives; at most {StudyService.MaxAlternatives} are accepted."];
-        return new Outcome(section, alternatives, errors, false);
+        return new Outcome(section, alternatives, errors);
     }
 
     // The base must be a valid section by itself; its problems are keyed under the base's pointer.
@@ -72,21 +74,8 @@ public static class StudyBody
     {
         var document = SectionParser.Parse(json, out var parseProblems);
         var problems = document is null ? parseProblems : SectionValidator.Validate(document).Problems;
-        foreach (var g in problems.GroupBy(p => prefix + p.Pointer)) errors[g.Key.Length == 0 ? "base" : g.Key] = g.Select(p => p.Message).ToArray();
+        foreach (var (key, messages) in ApiProblems.Errors(problems, p => prefix + p.Pointer, p => p.Message))
+            errors[key.Length == 0 ? "base" : key] = messages;
         return problems.Count == 0 ? JsonNode.Parse(json) as JsonObject : null;
-    }
-
-    private static async Task<string?> ReadTextAsync(HttpRequest request, CancellationToken cancellation)
-    {
-        if (request.ContentLength > SectionBody.MaxBytes) return null;
-        using var buffer = new MemoryStream();
-        var chunk = new byte[81920];
-        int read;
-        while ((read = await request.Body.ReadAsync(chunk, cancellation)) > 0)
-        {
-            buffer.Write(chunk, 0, read);
-            if (buffer.Length > SectionBody.MaxBytes) return null;
-        }
-        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
     }
 }

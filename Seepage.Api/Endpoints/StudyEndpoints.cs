@@ -1,5 +1,6 @@
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
+using Seepage.Api.Errors;
 using Seepage.Api.Storage;
 
 namespace Seepage.Api.Endpoints;
@@ -35,39 +36,47 @@ public static class StudyEndpoints
         return app;
     }
 
-    public static async Task<Results<Created<StudyDto>, Accepted<StudyDto>, ContentHttpResult, ValidationProblem, ProblemHttpResult>> Create(
-        HttpRequest request, StudyService service, AnalysisStore store, ExampleCatalog catalog, string? @base, bool? background,
-        string? format, CancellationToken cancellation)
+    public static async Task<Results<Created<StudyDto>, Accepted<StudyDto>, ContentHttpResult, ValidationProblem,
+        ProblemHttpResult>> Create(HttpRequest request, StudyService service, AnalysisStore store, ExampleCatalog catalog,
+        string? @base, string? background, string? format, CancellationToken cancellation)
     {
+        var (wantsCsv, badFormat) = WantsCsv(request, format);
+        if (badFormat is not null) return badFormat;
+        var (inBackground, badBackground) = QueryChoice.Background.Read(background);
+        if (badBackground is not null) return badBackground;
         var body = await StudyBody.ReadAsync(request, @base, store, catalog, cancellation);
-        if (body.TooLarge)
-            return TypedResults.Problem(statusCode: StatusCodes.Status413PayloadTooLarge, title: "The body is too large.",
-                detail: $"Studies are limited to {SectionBody.MaxBytes / (1024 * 1024)} MiB.");
+        if (body.Refusal is { } refused) return refused;
         if (body.Errors.Count > 0 || body.Base is null)
-            return TypedResults.ValidationProblem(body.Errors, title: "The study has problems.",
-                detail: "Each problem is listed under the JSON pointer (or spreadsheet cell) concerned.");
-        bool later = background == true || body.Alternatives.Count > StudyService.WaitLimit;
+            return ApiProblems.Invalid(body.Errors, "The study has problems.",
+                "Each problem is listed under the JSON pointer (or spreadsheet cell) concerned.");
+        bool later = inBackground == "true" || body.Alternatives.Count > StudyService.WaitLimit;
         var study = await service.StartAsync(body.Base, body.Alternatives, later, cancellation);
         string location = $"/api/v1/studies/{study.Id}";
         if (later) return TypedResults.Accepted(location, study);
-        if (WantsCsv(request, format))
+        if (wantsCsv)
         {
             request.HttpContext.Response.Headers.Location = location;
-            return TypedResults.Content(StudyCsvWriter.Write(study), "text/csv; charset=utf-8", statusCode: StatusCodes.Status201Created);
+            return TypedResults.Content(StudyCsvWriter.Write(study), CsvType, statusCode: StatusCodes.Status201Created);
         }
         return TypedResults.Created(location, study);
     }
 
-    public static async Task<Results<Ok<StudyDto>, ContentHttpResult, ProblemHttpResult>> Get(string id, string? format, HttpRequest request,
-        StudyService service, CancellationToken cancellation)
+    public static async Task<Results<Ok<StudyDto>, ContentHttpResult, ValidationProblem, ProblemHttpResult>> Get(string id,
+        string? format, HttpRequest request, StudyService service, CancellationToken cancellation)
     {
-        if (await service.GetAsync(id, cancellation) is not { } study)
-            return TypedResults.Problem(statusCode: StatusCodes.Status404NotFound, title: "No such study.", detail: $"No study has the id '{id}'.");
-        return WantsCsv(request, format) ? TypedResults.Content(StudyCsvWriter.Write(study), "text/csv; charset=utf-8") : TypedResults.Ok(study);
+        var (wantsCsv, badFormat) = WantsCsv(request, format);
+        if (badFormat is not null) return badFormat;
+        if (await service.GetAsync(id, cancellation) is not { } study) return ApiProblems.NotFound("study", id);
+        return wantsCsv ? TypedResults.Content(StudyCsvWriter.Write(study), CsvType) : TypedResults.Ok(study);
     }
 
-    /// <summary>CSV when ?format=csv or the Accept header asks for text/csv.</summary>
-    public static bool WantsCsv(HttpRequest request, string? format) =>
-        string.Equals(format, "csv", StringComparison.OrdinalIgnoreCase) ||
-        request.Headers.Accept.Any(a => a?.Contains("text/csv", StringComparison.OrdinalIgnoreCase) == true);
+    private const string CsvType = "text/csv; charset=utf-8";
+
+    /// <summary>CSV when ?format=csv, or when no format is given and the Accept header asks for text/csv.</summary>
+    public static (bool Csv, ValidationProblem? Problem) WantsCsv(HttpRequest request, string? format)
+    {
+        var (chosen, problem) = QueryChoice.StudyFormat.Read(format);
+        bool accept = request.Headers.Accept.Any(a => a?.Contains("text/csv", StringComparison.OrdinalIgnoreCase) == true);
+        return (chosen == "csv" || (format is null && accept), problem);
+    }
 }

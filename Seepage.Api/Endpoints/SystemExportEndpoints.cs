@@ -1,7 +1,7 @@
 using System.Text;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Core;
-using Seepage.Core.Meshing;
+using Seepage.Api.Errors;
 using Seepage.Core.Solvers;
 
 namespace Seepage.Api.Endpoints;
@@ -27,24 +27,14 @@ public static class SystemExportEndpoints
     public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> Export(HttpRequest request,
         string? part, CancellationToken cancellation)
     {
-        part ??= "matrix";
-        if (part is not ("matrix" or "rhs"))
-            return TypedResults.ValidationProblem(new Dictionary<string, string[]> { ["part"] = ["must be 'matrix' or 'rhs'."] },
-                title: "Unknown part.");
+        var (chosen, unknown) = QueryChoice.SystemPart.Read(part);
+        if (unknown is not null) return unknown;
         var body = await SectionBody.ReadAsync(request, cancellation);
-        if (body.TooLarge) return SectionProblems.TooLarge();
-        if (body.Model is null || body.Problems.Count > 0) return SectionProblems.Invalid(body);
-        try
-        {
-            var system = await Task.Run(() => Analysis.AssembleSystem(body.Model, cancellation), cancellation);
-            var text = new StringWriter(new StringBuilder(), System.Globalization.CultureInfo.InvariantCulture);
-            if (part == "matrix") MatrixMarket.Write(system.Matrix, text); else MatrixMarket.WriteVector(system.Rhs, text);
-            return TypedResults.Text(text.ToString(), "text/plain");
-        }
-        catch (MeshingException ex)
-        {
-            return TypedResults.ValidationProblem(new Dictionary<string, string[]> { [""] = [ex.Message] },
-                title: "The section could not be meshed.", detail: ex.Message);
-        }
+        if (body.Refusal is { } refused) return refused;
+        if (body.Invalid is { } invalid) return invalid;
+        var system = await Task.Run(() => Analysis.AssembleSystem(body.Model!, cancellation), cancellation);
+        var text = new StringWriter(new StringBuilder(), System.Globalization.CultureInfo.InvariantCulture);
+        if (chosen == "matrix") MatrixMarket.Write(system.Matrix, text); else MatrixMarket.WriteVector(system.Rhs, text);
+        return TypedResults.Text(text.ToString(), "text/plain");
     }
 }

@@ -33,7 +33,7 @@ public static class ConjugateGradient
         for (int i = 0; i < n; i++) r[i] = b[i] - r[i];
         double residual = Math.Sqrt(VectorKernels.Dot(r, r)) / bNorm;
         if (!double.IsFinite(residual))
-            throw new SolverNotConvergedException(method, 0, residual, tol, "non-finite residual (check matrix and right-hand side)");
+            throw new MatrixRefusedException(method, "non-finite initial residual (check matrix and right-hand side)");
         int iteration = 0;
         double rz = 0;
         while (residual > tol)

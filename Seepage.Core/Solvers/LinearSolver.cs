@@ -31,7 +31,7 @@ public static class LinearSolver
         var d = a.Diagonal();
         for (int i = 0; i < d.Length; i++)
             if (!(d[i] > 0) || double.IsInfinity(d[i]))
-                throw new SolverNotConvergedException("linear solve", 0, double.NaN, 0,
+                throw new MatrixRefusedException("linear solve",
                     FormattableString.Invariant($"matrix not positive definite: diagonal entry {d[i]:E3} in row {i}"));
         return d;
     }
