@@ -1,4 +1,5 @@
-using System.Reflection;
+using System.Text.Json.Nodes;
+using Microsoft.OpenApi;
 
 namespace Seepage.Api;
 
@@ -25,6 +26,16 @@ public static class OpenApiSetup
                 if (File.Exists(path)) o.IncludeXmlComments(path);
             }
             o.OperationFilter<SectionExampleFilter>();
+            // A client generator must be able to trust the document: nullability from the C# annotations
+            // (a nullable reference wraps its $ref in allOf), required lists, every response's content types,
+            // every parameter described.
+            o.SupportNonNullableReferenceTypes();
+            o.UseAllOfToExtendReferenceSchemas();
+            o.MapType<JsonNode>(() => new OpenApiSchema { Description = "Any JSON value." });
+            o.MapType<JsonObject>(() => new OpenApiSchema { Type = JsonSchemaType.Object, Description = "A JSON object." });
+            o.SchemaFilter<OpenApi.ContractSchemaFilter>();
+            o.OperationFilter<OpenApi.ContentTypeFilter>();
+            o.OperationFilter<OpenApi.ParameterFilter>();
         });
         return services;
     }

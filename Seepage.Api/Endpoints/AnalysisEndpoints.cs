@@ -2,6 +2,7 @@ using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 using Seepage.Api.Errors;
+using Seepage.Api.OpenApi;
 using Seepage.Core.Sections;
 
 namespace Seepage.Api.Endpoints;
@@ -21,24 +22,28 @@ public static class AnalysisEndpoints
                 "The result is stored; its field data for drawing is at /api/v1/analyses/{id}/field.")
             .Accepts<SectionDocument>("application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
+            .ProducesProblem(StatusCodes.Status415UnsupportedMediaType)
             .ProducesProblem(StatusCodes.Status422UnprocessableEntity);
         group.MapGet("/{id}", Get)
             .WithName("GetAnalysis")
             .WithSummary("Read a stored analysis")
             .WithDescription("Returns the result document of an earlier analysis.")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(ParameterNote.AnalysisId);
         group.MapGet("/{id}/field", GetField)
             .WithName("GetAnalysisField")
             .WithSummary("Read the field data of an analysis")
             .WithDescription("Node coordinates (m), triangles, zone per triangle, total head per node (m), equipotentials at equal head " +
                 "drops, flow lines bounding equal-flow channels, flow-net counts and the wall polylines, for drawing.")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(ParameterNote.AnalysisId);
         group.MapGet("/{id}/section", GetSection)
             .WithName("GetAnalysisSection")
             .WithSummary("Read the section an analysis was run on")
             .WithDescription("Returns the section document exactly as it was posted.")
             .Produces<SectionDocument>(StatusCodes.Status200OK, "application/json")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(ParameterNote.AnalysisId);
         return app;
     }
 

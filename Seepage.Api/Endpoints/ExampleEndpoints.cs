@@ -1,5 +1,6 @@
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
+using Seepage.Api.OpenApi;
 using Seepage.Core.Sections;
 
 namespace Seepage.Api.Endpoints;
@@ -19,7 +20,8 @@ public static class ExampleEndpoints
             .WithSummary("Read one example section")
             .WithDescription("Returns the section document of the named example, ready to post to /api/v1/analyses.")
             .Produces<SectionDocument>(StatusCodes.Status200OK, "application/json")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(ParameterNote.ExampleName);
         return app;
     }
 

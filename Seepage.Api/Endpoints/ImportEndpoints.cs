@@ -26,12 +26,12 @@ public static class ImportEndpoints
             .WithName("GetSectionTemplateXlsx")
             .WithSummary("Download the section template as an .xlsx workbook")
             .WithDescription("The example section (an invented weir) filled in, one sheet per block, with a notes sheet.")
-            .Produces(StatusCodes.Status200OK, contentType: RequestBody.Xlsx);
+            .Produces<byte[]>(StatusCodes.Status200OK, RequestBody.Xlsx);
         group.MapGet("/template.csv", (ExampleCatalog catalog) => Template(catalog, xlsx: false))
             .WithName("GetSectionTemplateCsv")
             .WithSummary("Download the section template as CSV")
             .WithDescription("The example section (an invented weir) filled in, all blocks on one sheet separated by blank rows.")
-            .Produces(StatusCodes.Status200OK, contentType: RequestBody.Csv);
+            .Produces<string>(StatusCodes.Status200OK, RequestBody.Csv);
         return app;
     }
 

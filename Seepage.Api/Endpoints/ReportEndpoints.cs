@@ -1,6 +1,7 @@
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
 using Seepage.Api.Errors;
+using Seepage.Api.OpenApi;
 using Seepage.Api.Reports;
 using Seepage.Api.Storage;
 using Seepage.Core.Sections;
@@ -21,33 +22,37 @@ public static class ReportEndpoints
             .WithDescription("A printable memo: caution, inputs (soils with units, geometry figure, heads), flow net, uplift diagram, exit " +
                 "gradient profile with the allowable line, the figures-and-checks table (achieved and required factors, pass/fail), methods " +
                 "and sources, mesh and solver statistics. Vector figures (inline SVG; PDF drawing). Built from the stored analysis.")
-            .Produces(StatusCodes.Status200OK, contentType: "text/html")
-            .Produces(StatusCodes.Status200OK, contentType: Pdf)
-            .ProducesProblem(StatusCodes.Status400BadRequest)
+            .Produces<string>(StatusCodes.Status200OK, "text/html")
+            .Produces<byte[]>(StatusCodes.Status200OK, Pdf)
+            .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status503ServiceUnavailable);
+            .ProducesProblem(StatusCodes.Status503ServiceUnavailable)
+            .WithMetadata(QueryChoice.ReportFormat, ParameterNote.AnalysisId);
         analyses.MapGet("/{id}/uplift.csv", UpliftCsv)
             .WithName("GetUpliftCsv")
             .WithSummary("Uplift stations as CSV")
             .WithDescription("structure, x (m), y (m), total head (m), pore pressure (kPa), one row per station of every structure base.")
-            .Produces(StatusCodes.Status200OK, contentType: "text/csv")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .Produces<string>(StatusCodes.Status200OK, "text/csv")
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(ParameterNote.AnalysisId);
         analyses.MapGet("/{id}/exit.csv", ExitCsv)
             .WithName("GetExitCsv")
             .WithSummary("Exit gradient profile as CSV")
             .WithDescription("x (m), averaged upward exit gradient, allowable gradient i_c/F, one row per station of the exit surface.")
-            .Produces(StatusCodes.Status200OK, contentType: "text/csv")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .Produces<string>(StatusCodes.Status200OK, "text/csv")
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(ParameterNote.AnalysisId);
         app.MapGroup("/api/v1/studies").WithTags("Reports").MapGet("/{id}/report", StudyReport)
             .WithName("GetStudyReport")
             .WithSummary("Comparison memo of a study (HTML, or PDF with ?format=pdf)")
             .WithDescription("A table of the alternatives and their key figures and a chart of one figure (?figure=flow|upliftForce|" +
                 "exitGradient|exitFactor, default flow) against the first varied member whose values are numbers.")
-            .Produces(StatusCodes.Status200OK, contentType: "text/html")
-            .Produces(StatusCodes.Status200OK, contentType: Pdf)
-            .ProducesProblem(StatusCodes.Status400BadRequest)
+            .Produces<string>(StatusCodes.Status200OK, "text/html")
+            .Produces<byte[]>(StatusCodes.Status200OK, Pdf)
+            .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status503ServiceUnavailable);
+            .ProducesProblem(StatusCodes.Status503ServiceUnavailable)
+            .WithMetadata(QueryChoice.ReportFormat, StudyFigure, ParameterNote.StudyId);
         return app;
     }
 

@@ -16,7 +16,8 @@ public static class SectionEndpoints
             .WithDescription("Parses and validates the posted section document without meshing or solving it. Answers 200 with any " +
                 "warnings, or 400 problem details listing every problem under the JSON pointer of the member concerned.")
             .Accepts<SectionDocument>("application/json")
-            .ProducesProblem(StatusCodes.Status413PayloadTooLarge);
+            .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
+            .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
         return app;
     }
 

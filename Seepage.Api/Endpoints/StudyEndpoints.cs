@@ -1,6 +1,7 @@
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
 using Seepage.Api.Errors;
+using Seepage.Api.OpenApi;
 using Seepage.Api.Storage;
 
 namespace Seepage.Api.Endpoints;
@@ -23,16 +24,20 @@ public static class StudyEndpoints
                 "far. Rows as CSV with Accept: text/csv or ?format=csv.")
             .Accepts<StudyRequestDto>("application/json", "text/csv")
             .Produces<StudyDto>(StatusCodes.Status201Created)
+            .Produces<string>(StatusCodes.Status201Created, "text/csv")
             .Produces<StudyDto>(StatusCodes.Status202Accepted)
-            .ProducesProblem(StatusCodes.Status413PayloadTooLarge);
+            .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
+            .ProducesProblem(StatusCodes.Status415UnsupportedMediaType)
+            .WithMetadata(QueryChoice.StudyFormat, QueryChoice.Background, ParameterNote.StudyBase);
         group.MapGet("/{id}", Get)
             .WithName("GetStudy")
             .WithSummary("Read a study and its progress")
             .WithDescription("Returns the study: status (running, done, failed, cancelled, interrupted), done/total and the rows finished so far; " +
                 "as CSV with Accept: text/csv or ?format=csv.")
             .Produces<StudyDto>(StatusCodes.Status200OK)
-            .Produces(StatusCodes.Status200OK, contentType: "text/csv")
-            .ProducesProblem(StatusCodes.Status404NotFound);
+            .Produces<string>(StatusCodes.Status200OK, "text/csv")
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .WithMetadata(QueryChoice.StudyFormat, ParameterNote.StudyId);
         return app;
     }
 

@@ -20,7 +20,10 @@ public static class SystemExportEndpoints
                 "(default) gives K_FF as a Matrix Market coordinate file, `part=rhs` the right-hand side as an array file.")
             .Accepts<Seepage.Core.Sections.SectionDocument>("application/json")
             .Produces<string>(StatusCodes.Status200OK, "text/plain")
-            .ProducesProblem(StatusCodes.Status413PayloadTooLarge);
+            .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
+            .ProducesProblem(StatusCodes.Status415UnsupportedMediaType)
+            .ProducesProblem(StatusCodes.Status422UnprocessableEntity)
+            .WithMetadata(QueryChoice.SystemPart);
         return app;
     }
 
