@@ -23,7 +23,7 @@ public static class Analysis
         var mesh = MakeMesh(section, warnings, cancellation);
         var solution = FieldSolver.Solve(section, mesh, section.Mesh.Order, options.Solver, cancellation);
         var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
-        double tolerance = 1e-6 * section.Extent;
+        double tolerance = section.MatchTolerance;
 
         var (flow, reactions) = FlowCalculator.Compute(solution.System, field.Heads, boundary, section, tolerance, solution.Quadratic);
         var sampler = new FieldSampler(field);
@@ -80,7 +80,7 @@ public static class Analysis
     {
         if (exit is not null)
         {
-            int t = sampler.Locate(new Seepage.Core.Geometry.Point2(exit.AtX, exit.AtY - 1e-6 * section.Extent));
+            int t = sampler.Locate(new Seepage.Core.Geometry.Point2(exit.AtX, exit.AtY - section.MatchTolerance));
             if (t >= 0) return section.Soils[section.Zones[sampler.Field.Mesh.Zones[t]].Soil];
         }
         return section.Soils[section.Zones[0].Soil];

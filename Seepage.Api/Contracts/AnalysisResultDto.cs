@@ -42,10 +42,11 @@ public sealed record UpliftStationDto(double X, double Y, double Head, double Pr
 
 /// <summary>Exit gradient check (criticalGradient, factor, pass are null when the exit soil lacks Gs and e). Gradients dimensionless; <c>at</c> = [x, y] in m; <c>depth</c> in m.</summary>
 /// <remarks><c>rowGradientAtMax</c>: the single-element-row gradient (boundary triangle's gradient · inward normal) at the
-/// maximum; <c>maxRowGradient</c> at <c>maxRowAt</c>: the largest such value on the exit surface.</remarks>
+/// maximum; <c>maxRowGradient</c> at <c>maxRowAt</c>: the largest such value on the exit surface.
+/// <c>allowableGradient</c> = criticalGradient / requiredFactor (null without a critical gradient).</remarks>
 public sealed record ExitDto(double MaxGradient, double[] At, double? CriticalGradient, double? Factor, double RequiredFactor,
     bool? Pass, double Depth, string Method, IReadOnlyList<ExitProfilePointDto> Profile,
-    double RowGradientAtMax = 0, double MaxRowGradient = 0, double[]? MaxRowAt = null);
+    double RowGradientAtMax = 0, double MaxRowGradient = 0, double[]? MaxRowAt = null, double? AllowableGradient = null);
 
 /// <summary>Profile point: x in m, gradient averaged over the depth, rowGradient of the element row (dimensionless).</summary>
 public sealed record ExitProfilePointDto(double X, double Gradient, double RowGradient = 0);

@@ -20,7 +20,7 @@ public static class ResultMapper
         ExitDto? exit = r.Exit is { } e
             ? new ExitDto(e.MaxGradient, [e.AtX, e.AtY], e.CriticalGradient, e.Factor, e.RequiredFactor, e.Pass, e.Depth, e.Method,
                 e.Profile.Select(p => new ExitProfilePointDto(p.X, p.Gradient, p.RowGradient)).ToList(),
-                e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY])
+                e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY], e.AllowableGradient)
             : null;
         var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass,
             h.EffectiveWeight, h.UpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
@@ -61,7 +61,8 @@ public static class ResultMapper
         }
         return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
             equipotentials, flowLines, counts, walls, gradients, velocities,
-            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList());
+            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList(),
+            WaterUnitWeight: r.Section.WaterUnitWeight);
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :

@@ -66,9 +66,8 @@ public static class AnalysisFigures
         var line = exit.Profile.Select(p => new FigurePoint(p.X, p.Gradient)).ToList();
         var items = new List<FigureItem> { new(line, "#1f5fbf", 1.5) };
         var legend = new List<LegendEntry> { new("#1f5fbf", $"exit gradient (averaged over {ReportFormat.N(exit.Depth)} m)") };
-        if (exit.CriticalGradient is { } ic && exit.RequiredFactor > 0)
+        if (exit is { CriticalGradient: { } ic, AllowableGradient: { } allowable })
         {
-            double allowable = ic / exit.RequiredFactor;
             items.Add(new FigureItem([new(line[0].X, allowable), new(line[^1].X, allowable)], "#c0392b", 1.5, Dashed: true));
             legend.Add(new("#c0392b", $"allowable i_c/F = {ReportFormat.N(ic)}/{ReportFormat.N(exit.RequiredFactor)} = {ReportFormat.N(allowable)}", true));
         }

@@ -18,7 +18,7 @@ public static class AnalysisReportBuilder
         {
             new ReportHeading("1. Inputs"),
             new ReportParagraph($"Section: {section.Title ?? r.Title}. {section.Description ?? ""} Lengths in m, elevations y positive up, " +
-                $"heads are total heads in m, conductivity in {unit}, unit weight of water {N(section.WaterUnitWeight ?? 9.81)} kN/m³."),
+                $"heads are total heads in m, conductivity in {unit}, unit weight of water {N(section.WaterUnitWeight ?? SectionDefaults.WaterUnitWeight)} kN/m³."),
             new ReportTable("Soils", ["Soil", $"kx ({unit})", $"ky ({unit})", "Bedding angle (°)", "Gs", "Void ratio e", "γsat (kN/m³)", "Creep class"],
                 (section.Soils ?? []).Select(s => Row(s.Id ?? "", N(s.Kx), N(s.Ky ?? s.Kx), N(s.BeddingAngle ?? 0), N(s.SpecificGravity),
                     N(s.VoidRatio), N(s.SaturatedUnitWeight), s.CreepClass ?? "—")).ToList()),

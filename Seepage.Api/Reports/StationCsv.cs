@@ -19,7 +19,7 @@ public static class StationCsv
     public static string Exit(AnalysisResultDto r)
     {
         var rows = new List<IReadOnlyList<object?>> { new object?[] { "x (m)", "upward exit gradient (-)", "allowable gradient i_c/F (-)" } };
-        double? allowable = r.Exit is { CriticalGradient: { } ic, RequiredFactor: > 0 } e ? ic / e.RequiredFactor : null;
+        double? allowable = r.Exit?.AllowableGradient;
         foreach (var p in r.Exit?.Profile ?? []) rows.Add(new object?[] { p.X, p.Gradient, allowable });
         return CsvText.Write(rows);
     }

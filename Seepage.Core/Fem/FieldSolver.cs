@@ -31,7 +31,7 @@ public static class FieldSolver
     {
         var tensors = section.Zones.Select(z => ConductivityTensor.Of(section.Soils[z.Soil])).ToList();
         var boundary = new MeshBoundary(mesh);
-        double tolerance = 1e-6 * section.Extent;
+        double tolerance = section.MatchTolerance;
         var quadratic = order == 2 ? new QuadraticDofs(mesh) : null;
         var fixedHeads = FixedHeadBuilder.Build(mesh, boundary, section, tolerance, quadratic);
         var full = quadratic is null

@@ -9,7 +9,7 @@ public sealed record MeshOptions
 
     /// <summary>Smallest triangle angle in degrees, 20–33 accepted. Default 28°. Not enforced at vertices
     /// where two input segments meet at a smaller angle.</summary>
-    public double MinAngle { get; init; } = 28.0;
+    public double MinAngle { get; init; } = Sections.SectionDefaults.MinAngle;
 
     /// <summary>Edge length at singular points (cutoff tips, structure corners, ends of head boundaries)
     /// as a fraction of <see cref="Size"/>. Default 0.15.</summary>

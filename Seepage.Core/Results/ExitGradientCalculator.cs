@@ -11,7 +11,7 @@ namespace Seepage.Core.Results;
 /// what is compared with the critical gradient i_c = (Gs − 1)/(1 + e) (or (γsat − γw)/γw) (Terzaghi, "Theoretical Soil
 /// Mechanics", 1943: the flotation gradient). Beside it each station carries the gradient of the single element row
 /// at the exit, ∇h·n of the boundary triangle at the station, so a reviewer sees how much the averaging matters.
-/// The default depth d = 0.5 m is set by the section validator and stated in <see cref="ExitResult.Method"/>.
+/// The default depth d (<see cref="SectionDefaults.ExitDepth"/>) is set by the section validator and stated in <see cref="ExitResult.Method"/>.
 /// </summary>
 public static class ExitGradientCalculator
 {
@@ -55,7 +55,7 @@ public static class ExitGradientCalculator
         bool? pass = factor is { } f ? f >= exit.RequiredFactor : null;
         WarnIfSingular(section, new Point2(max.P.X, max.P.Y), d, warnings);
         string method = FormattableString.Invariant(
-            $"upward gradient (h(p + d·n) − h(p))/d averaged over d = {d} m below the exit surface (default 0.5 m), n the inward normal; rowGradient: ∇h·n of the single element row at the exit (order {sampler.Field.Order} elements)");
+            $"upward gradient (h(p + d·n) − h(p))/d averaged over d = {d} m below the exit surface (default {SectionDefaults.ExitDepth} m), n the inward normal; rowGradient: ∇h·n of the single element row at the exit (order {sampler.Field.Order} elements)");
         return new ExitResult(max.P.Gradient, max.P.X, max.P.Y, critical, factor, exit.RequiredFactor, pass, d, method,
             points.Select(p => p.P).ToList(), max.P.RowGradient, maxRow.P.RowGradient, maxRow.P.X, maxRow.P.Y);
     }
@@ -76,7 +76,7 @@ public static class ExitGradientCalculator
                 warnings.Add($"Exit gradient: the maximum sits by the tip of cutoff '{c.Name}', a singular point; the value is the average over the stated depth, not a point value.");
         foreach (var s in section.Structures)
             foreach (var end in new[] { s.Base[0], s.Base[^1] })
-                if (end.DistanceTo(at) <= Math.Max(depth, 1e-3 * section.Extent) && section.Cutoffs.All(c => c.Top.DistanceTo(end) > 1e-6 * section.Extent))
+                if (end.DistanceTo(at) <= Math.Max(depth, 1e-3 * section.Extent) && section.Cutoffs.All(c => c.Top.DistanceTo(end) > section.MatchTolerance))
                     warnings.Add($"Exit gradient: the maximum sits at the toe of '{s.Name}', a singular corner; the value is the average over the stated depth, not a point value.");
     }
 }

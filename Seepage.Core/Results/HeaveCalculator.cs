@@ -47,7 +47,7 @@ public static class HeaveCalculator
             double uplift = gw * excess * width;
             double? factor = weight is { } w && uplift > 0 ? w / uplift : null;
             if (ic is null) warnings.Add($"Heave: soil '{soil.Id}' beside cutoff '{c.Name}' lacks specificGravity and voidRatio (or saturatedUnitWeight); no factor.");
-            if (section.Structures.Any(s => PolygonMath.DistanceToPolyline(new Point2(c.Tip.X + side * width / 2, top), s.Base) < 1e-6 * section.Extent))
+            if (section.Structures.Any(s => PolygonMath.DistanceToPolyline(new Point2(c.Tip.X + side * width / 2, top), s.Base) < section.MatchTolerance))
                 warnings.Add($"Heave: the prism beside cutoff '{c.Name}' lies under a structure; the structure's weight is not counted.");
             bool? pass = factor is { } f ? f >= section.HeaveRequiredFactor : null;
             double from = c.Tip.X, to = c.Tip.X + side * width;

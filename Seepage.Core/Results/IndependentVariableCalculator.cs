@@ -23,7 +23,7 @@ public static class IndependentVariableCalculator
     {
         if (section.Structures.Count != 1 || section.Heads.Count < 2) return null;
         var floor = section.Structures[0];
-        double tol = 1e-6 * section.Extent;
+        double tol = section.MatchTolerance;
         if (FloorProfile(floor.Base, tol) is not var (underside, ground))
         {
             notes.Add("Independent variables: the floor is neither a level or sloping floor on the ground nor a level floor sunk into it with vertical ends; the method is not applied.");
@@ -41,7 +41,7 @@ public static class IndependentVariableCalculator
         if (reversed) { notes.Add("Independent variables: the headwater is on the +x side; the method is applied to sections with flow in +x only."); return null; }
 
         var result = new List<KeyPointPile>();
-        double eps = 1e-6 * section.Extent;
+        double eps = section.MatchTolerance;
         for (int i = 0; i < piles.Count; i++)
         {
             var c = piles[i];

@@ -10,7 +10,7 @@ public sealed record KeyFigures(double Flow, double? ExitGradient, double? Uplif
 {
     public static KeyFigures Of(SectionModel section, FieldSolution s)
     {
-        double tolerance = 1e-6 * section.Extent;
+        double tolerance = section.MatchTolerance;
         var (flow, _) = FlowCalculator.Compute(s.System, s.Field.Heads, s.Boundary, section, tolerance, s.Quadratic);
         var sampler = new FieldSampler(s.Field);
         var exit = ExitGradientCalculator.Compute(section, sampler, s.Boundary, tolerance, []);

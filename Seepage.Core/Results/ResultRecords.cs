@@ -1,3 +1,4 @@
+using Seepage.Core.Sections;
 namespace Seepage.Core.Results;
 
 /// <summary>Flow through one head or drain boundary, m³/s per metre, positive into the soil.</summary>
@@ -38,7 +39,11 @@ public sealed record ExitProfilePoint(double X, double Y, double Gradient, doubl
 /// MaxRowGradient (at MaxRowX, MaxRowY, m) is the largest element-row gradient anywhere on the exit surface.</remarks>
 public sealed record ExitResult(double MaxGradient, double AtX, double AtY, double? CriticalGradient, double? Factor,
     double RequiredFactor, bool? Pass, double Depth, string Method, IReadOnlyList<ExitProfilePoint> Profile,
-    double RowGradientAtMax, double MaxRowGradient, double MaxRowX, double MaxRowY);
+    double RowGradientAtMax, double MaxRowGradient, double MaxRowX, double MaxRowY)
+{
+    /// <summary>Allowable exit gradient i_c / F_required, dimensionless; null without a critical gradient.</summary>
+    public double? AllowableGradient => SectionDefaults.AllowableGradient(CriticalGradient, RequiredFactor);
+}
 
 /// <summary>Heave at one cutoff by Terzaghi's prism (depth D m from the downstream surface to the tip, width D/2):
 /// average excess head (m) at the prism base over the head at its top, factor = γ′D/(γw·h_a). EffectiveWeight

@@ -27,7 +27,7 @@ public static class TruncationCheck
         var features = section.Structures.SelectMany(s => s.Base).Concat(section.Cutoffs.SelectMany(c => new[] { c.Top, c.Tip })).ToList();
         if (features.Count == 0 || flow <= 0) return null;
         var all = section.Zones.SelectMany(z => z.Outline).ToList();
-        double left = all.Min(p => p.X), right = all.Max(p => p.X), tol = 1e-6 * section.Extent;
+        double left = all.Min(p => p.X), right = all.Max(p => p.X), tol = section.MatchTolerance;
         double fl = features.Min(p => p.X) - left, fr = right - features.Max(p => p.X);
         if (fl <= tol || fr <= tol) return null;
         double newLeft = left - fl / 2, newRight = right + fr / 2;

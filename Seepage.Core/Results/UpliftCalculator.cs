@@ -72,7 +72,7 @@ public static class UpliftCalculator
         double high, double low)
     {
         var list = new List<UpliftJunction>();
-        double h = high - low, tol = 1e-6 * section.Extent;
+        double h = high - low, tol = section.MatchTolerance;
         if (h <= 0) return list;
         foreach (var c in section.Cutoffs)
         {

@@ -39,8 +39,12 @@ public sealed record SectionModel(
     /// Null means "automatically for small models".</summary>
     public bool? TruncationCheck { get; init; }
 
-    /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
-    public double Tolerance => 1e-7 * Extent;
+    /// <summary>Tolerance of the input geometry, metres (<see cref="GeometricTolerance.Input"/> of the extent).</summary>
+    public double Tolerance => GeometricTolerance.Input * Extent;
+
+    /// <summary>Tolerance for finding section polylines and points on the mesh, metres
+    /// (<see cref="GeometricTolerance.Match"/> of the extent).</summary>
+    public double MatchTolerance => GeometricTolerance.Match * Extent;
 }
 
 /// <summary>A soil. Kx, Ky in m/s along and across the bedding; BeddingAngle in degrees counter-clockwise from +x.</summary>

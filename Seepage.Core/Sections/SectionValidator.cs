@@ -29,7 +29,7 @@ public static class SectionValidator
         if (!ConductivityUnits.ToMetresPerSecond.TryGetValue(unit, out unitFactor))
             problems.Add(new("/conductivityUnit", $"'{unit}' is not a known unit; use one of {string.Join(", ", ConductivityUnits.ToMetresPerSecond.Keys)}."));
 
-        double gammaW = doc.WaterUnitWeight ?? 9.81;
+        double gammaW = doc.WaterUnitWeight ?? SectionDefaults.WaterUnitWeight;
         if (!double.IsFinite(gammaW) || gammaW < 5 || gammaW > 15)
             problems.Add(new("/waterUnitWeight", "must lie between 5 and 15 kN/m³ (fresh water 9.81, sea water about 10.05)."));
 
@@ -47,7 +47,7 @@ public static class SectionValidator
         {
             domain = new Domain(zones.Select(z => z.Outline));
             double extent = Extent(zones);
-            tolerance = 1e-7 * extent;
+            tolerance = GeometricTolerance.Input * extent;
             ZoneTilingCheck.Check(domain, tolerance, problems);
         }
 
@@ -66,7 +66,7 @@ public static class SectionValidator
             problems.Add(new("/heads", $"every fixed head is {heads[0].Total} m and there is no drain: nothing drives a flow."));
 
         var exit = ReadExit(doc.ExitCheck, heads, domain, tolerance, reader, problems);
-        double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? 1.5;
+        double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? SectionDefaults.HeaveRequiredFactor;
         if (!double.IsFinite(heaveFactor) || heaveFactor <= 0)
             problems.Add(new("/heaveCheck/requiredFactor", "must be a positive number."));
         var mesh = ReadMesh(doc.Mesh, zones, cutoffs, domain, problems);
@@ -203,9 +203,9 @@ public static class SectionValidator
     private static ExitCheck? ReadExit(ExitCheckDocument? doc, List<HeadBoundary> heads, Domain? domain, double tolerance,
         PointReader reader, List<SectionProblem> problems)
     {
-        double depth = doc?.Depth ?? 0.5;
+        double depth = doc?.Depth ?? SectionDefaults.ExitDepth;
         if (!double.IsFinite(depth) || depth <= 0) problems.Add(new("/exitCheck/depth", "must be a positive depth in metres."));
-        double required = doc?.RequiredFactor ?? 3.0;
+        double required = doc?.RequiredFactor ?? SectionDefaults.ExitRequiredFactor;
         if (!double.IsFinite(required) || required <= 0) problems.Add(new("/exitCheck/requiredFactor", "must be a positive number."));
         IReadOnlyList<Point2>? along;
         if (doc?.Along is not null)
@@ -228,7 +228,7 @@ public static class SectionValidator
         if (zones is null || zones.Count == 0) return null;
         double extent = Extent(zones);
         double size = doc?.Size ?? DefaultMeshSize(extent, cutoffs);
-        double minAngle = doc?.MinAngle ?? 28;
+        double minAngle = doc?.MinAngle ?? SectionDefaults.MinAngle;
         if (!double.IsFinite(size) || size <= 0) { problems.Add(new("/mesh/size", "must be a positive edge length in metres.")); return null; }
         if (!double.IsFinite(minAngle) || minAngle < 10 || minAngle > 33)
             problems.Add(new("/mesh/minAngle", "must lie between 10° and 33° (larger bounds may not terminate)."));

@@ -35,8 +35,9 @@ export function upliftPlot(uplift) {
 /** Exit gradient along the exit surface with the allowable gradient i_c / F_required. */
 export function exitPlot(exit) {
   const pts = (exit.profile ?? []).map(p => [p.x, p.gradient]);
-  const hasLimit = Number.isFinite(exit.criticalGradient) && exit.requiredFactor > 0;
-  const allowable = hasLimit ? exit.criticalGradient / exit.requiredFactor : null;
+  // The allowable gradient i_c / F is computed by the server (exit.allowableGradient).
+  const hasLimit = Number.isFinite(exit.allowableGradient);
+  const allowable = hasLimit ? exit.allowableGradient : null;
   const extent = hasLimit ? [...pts, [pts[0]?.[0] ?? 0, allowable * 1.1]] : pts;
   const plot = frame('Exit gradient along the exit surface', 'x (m)', 'upward gradient i (–)', extent, { includeZero: true });
   const { g, sx, sy } = plot;

@@ -98,11 +98,12 @@ export class Scene {
     const parts = [`x = ${fixed(w.x, 2)} m`, `y = ${fixed(w.y, 2)} m`];
     const hit = this.probe?.at(w.x, w.y);
     if (hit) {
-      const gammaW = Number.isFinite(this.section.waterUnitWeight) ? this.section.waterUnitWeight : 9.81;
+      const gammaW = this.field.waterUnitWeight ?? this.section.waterUnitWeight;
       const zoneIndex = this.field.zones?.[hit.triangle];
       const soil = this.field.zoneSoils?.[zoneIndex] ?? this.section.zones?.[zoneIndex]?.soil;
       parts.push(`h = ${fixed(hit.head, 3)} m`,
-        `u = γw(h − y) = ${fixed(gammaW * (hit.head - w.y), 1)} kPa`,
+        Number.isFinite(gammaW) ? `u = γw(h − y) = ${fixed(gammaW * (hit.head - w.y), 1)} kPa`
+          : 'u: re-run the analysis (γw not stored with it)',
         `|i| = ${sig(Math.hypot(hit.gradX, hit.gradY), 3)}`,
         `i up = ${sig(-hit.gradY, 3)}`);
       if (soil) parts.push(`soil ${soil}`);
