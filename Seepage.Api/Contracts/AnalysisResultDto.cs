@@ -53,9 +53,19 @@ public sealed record ExitProfilePointDto(double X, double Gradient, double RowGr
 
 /// <summary>Heave check at a cutoff (Terzaghi's prism, width D/2): depth D in m, average excess head in m;
 /// <c>prism</c> = [fromX, toX, surfaceY] in m;
-/// <c>effectiveWeight</c> W′ = γ′·D·D/2 and <c>upliftForce</c> γw·h_a·D/2 in kN/m.</summary>
+/// <c>effectiveWeight</c> W′ = γ′·D·D/2 and <c>prismUpliftForce</c> U = γw·h_a·D/2 in kN/m, the water force on the
+/// prism (not the uplift of a structure, which is <c>uplift[].force</c>). <c>upliftForce</c> is the same U under its
+/// former name, kept readable for a deprecation period; read <c>prismUpliftForce</c>.</summary>
 public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor, bool? Pass,
-    double? EffectiveWeight = null, double UpliftForce = 0, double[]? Prism = null);
+    double? EffectiveWeight = null,
+    [property: Obsolete("The water force on the heave prism is prismUpliftForce; upliftForce is kept for a deprecation period.")]
+    double UpliftForce = 0,
+    double[]? Prism = null,
+    double? PrismUpliftForce = null)
+{
+    /// <summary>U = γw·h_a·D/2 on the prism, kN/m. A result stored before the name existed reads its upliftForce.</summary>
+    public double? PrismUpliftForce { get; init; } = PrismUpliftForce ?? UpliftForce;
+}
 
 /// <summary>Hand creep checks beside the FE results (lengths in m, ratios dimensionless).</summary>
 public sealed record CreepDto(CreepCheckDto Lane, CreepCheckDto Bligh);

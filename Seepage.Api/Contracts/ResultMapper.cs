@@ -23,7 +23,7 @@ public static class ResultMapper
                 e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY], e.AllowableGradient)
             : null;
         var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass,
-            h.EffectiveWeight, h.UpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
+            h.EffectiveWeight, h.PrismUpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
         CreepDto? creep = r.Creep is { } c ? new CreepDto(Creep(c.Lane), Creep(c.Bligh)) : null;
         var q = r.Mesh.Quality;
         var mesh = new MeshStatsDto(q.Nodes, q.Triangles, q.MinAngle, q.MaxAngle, q.MinAngleHistogram, q.Seconds);

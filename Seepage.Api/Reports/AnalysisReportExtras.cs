@@ -53,7 +53,7 @@ public static class AnalysisReportExtras
             yield return [$"Exit gradient of the element row at the exit (max at {Point(e.MaxRowAt)})", "boundary triangle gradient, not averaged",
                 N(e.MaxRowGradient), "—", $"{N(e.RowGradientAtMax)} at the averaged maximum"];
         foreach (var h in r.Heave.Where(h => h.EffectiveWeight is not null))
-            yield return [$"Heave prism at {h.Cutoff}: W′ and U (kN/m)", "γ′·D·D/2 against γw·h_a·D/2", N(h.EffectiveWeight), "—", $"U = {N(h.UpliftForce)}"];
+            yield return [$"Heave prism at {h.Cutoff}: W′ and U (kN/m)", "γ′·D·D/2 against γw·h_a·D/2", N(h.EffectiveWeight), "—", $"U = {N(h.PrismUpliftForce)}"];
     }
 
     private static double? At(double[] values, int i) => i < values.Length ? values[i] : null;

@@ -47,10 +47,10 @@ public sealed record ExitResult(double MaxGradient, double AtX, double AtY, doub
 
 /// <summary>Heave at one cutoff by Terzaghi's prism (depth D m from the downstream surface to the tip, width D/2):
 /// average excess head (m) at the prism base over the head at its top, factor = γ′D/(γw·h_a). EffectiveWeight
-/// W′ = γ′·D·D/2 and UpliftForce U = γw·h_a·D/2 in kN/m (null without the soil's unit weight data); SurfaceY (m)
+/// W′ = γ′·D·D/2 and PrismUpliftForce U = γw·h_a·D/2 (the water force on the prism, not the uplift of a structure) in kN/m (null without the soil's unit weight data); SurfaceY (m)
 /// is the elevation of the prism's top.</summary>
 public sealed record HeaveResult(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor,
-    bool? Pass, double PrismFromX, double PrismToX, double? EffectiveWeight, double UpliftForce, double SurfaceY);
+    bool? Pass, double PrismFromX, double PrismToX, double? EffectiveWeight, double PrismUpliftForce, double SurfaceY);
 
 /// <summary>A creep check: (weighted) creep length in m, ratio = length / head difference, required ratio
 /// from the cited table when the soil's creep class is known.</summary>

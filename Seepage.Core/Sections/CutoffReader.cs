@@ -6,9 +6,10 @@ namespace Seepage.Core.Sections;
 /// a thickness and a conductivity kx is a permeable wall instead, whose tip may also rest on the boundary.</summary>
 internal static class CutoffReader
 {
-    public sealed record Walls(List<Cutoff> Cutoffs, List<PermeableWall> Permeable, List<int> PermeableIndex);
+    /// <summary>The impervious cutoffs and the permeable walls, with each wall's index in the section's cutoffs.</summary>
+    public sealed record CutoffSet(List<Cutoff> Cutoffs, List<PermeableWall> Permeable, List<int> PermeableIndex);
 
-    public static Walls Read(List<CutoffDocument>? docs, Domain? domain, double tolerance, double unitFactor, PointReader reader,
+    public static CutoffSet Read(List<CutoffDocument>? docs, Domain? domain, double tolerance, double unitFactor, PointReader reader,
         List<SectionProblem> problems)
     {
         var cutoffs = new List<Cutoff>();

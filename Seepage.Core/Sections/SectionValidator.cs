@@ -58,8 +58,8 @@ public static class SectionValidator
         var drains = ReadPolylines(doc.Drains?.Select(d => d is null ? null : Entry(d.Name, d.Along)).ToList(), "/drains", "along", "drain",
             "the drain polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
-        var walls = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
-        var cutoffs = walls.Cutoffs;
+        var cutoffSet = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
+        var cutoffs = cutoffSet.Cutoffs;
 
         if (doc.Heads is not null && heads.Count > 0 && drains.Count == 0 && heads.Select(h => h.Total).Distinct().Count() == 1
             && problems.All(p => !p.Pointer.StartsWith("/heads", StringComparison.Ordinal)))
@@ -79,9 +79,9 @@ public static class SectionValidator
         if (problems.Count > 0 || zones is null || exit is null || mesh is null)
             return new ValidationOutcome(null, problems);
 
-        if (walls.Permeable.Count > 0)
+        if (cutoffSet.Permeable.Count > 0)
         {
-            (soils, zones) = WallZones.Insert(soils, zones, walls, domain!, tolerance, problems);
+            (soils, zones) = WallZones.Insert(soils, zones, cutoffSet, domain!, tolerance, problems);
             if (problems.Count > 0) return new ValidationOutcome(null, problems);
         }
 

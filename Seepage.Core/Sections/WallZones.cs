@@ -12,7 +12,7 @@ namespace Seepage.Core.Sections;
 internal static class WallZones
 {
     public static (List<Soil> Soils, List<Zone> Zones) Insert(IReadOnlyList<Soil> soils, IReadOnlyList<Zone> zones,
-        CutoffReader.Walls read, Domain domain, double tolerance, List<SectionProblem> problems)
+        CutoffReader.CutoffSet read, Domain domain, double tolerance, List<SectionProblem> problems)
     {
         var walls = read.Permeable; var wallIndex = read.PermeableIndex;
         var outSoils = soils.ToList();

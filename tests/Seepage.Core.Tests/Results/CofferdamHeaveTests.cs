@@ -28,7 +28,7 @@ public class CofferdamHeaveTests
         Assert.True(left.AverageExcessHead > 0 && Math.Abs(left.AverageExcessHead / right.AverageExcessHead - 1) < 1e-3, "symmetric section, equal prisms");
         // W′ = γw·(Gs − 1)/(1 + e)·D·D/2 = 9.81·1.65/1.6·18 kN/m.
         Assert.Equal(9.81 * 1.65 / 1.6 * 18, left.EffectiveWeight!.Value, 1e-9);
-        Assert.Equal(left.EffectiveWeight.Value / left.UpliftForce, left.Factor!.Value, 1e-12);
+        Assert.Equal(left.EffectiveWeight.Value / left.PrismUpliftForce, left.Factor!.Value, 1e-12);
     }
 
     // The same cofferdam with the excavation dug 3 m below the river bed and kept pumped to its floor; the walls
@@ -56,7 +56,7 @@ public class CofferdamHeaveTests
         Assert.True(left.AverageExcessHead > 0 && left.AverageExcessHead < 7 && Math.Abs(left.AverageExcessHead / right.AverageExcessHead - 1) < 1e-3,
             $"excess head {left.AverageExcessHead:F4} m of the 7 m difference; right {right.AverageExcessHead:F4} m");
         Assert.Equal((20 - 9.81) * 18, left.EffectiveWeight!.Value, 1e-9);
-        Assert.Equal(left.EffectiveWeight.Value / left.UpliftForce, left.Factor!.Value, 1e-12);
+        Assert.Equal(left.EffectiveWeight.Value / left.PrismUpliftForce, left.Factor!.Value, 1e-12);
         var exit = result.Exit!;
         Assert.Equal(-3, exit.AtY, 1e-6);
         Assert.Equal((20 - 9.81) / 9.81, exit.CriticalGradient!.Value, 1e-12);
