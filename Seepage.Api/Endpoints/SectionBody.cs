@@ -11,7 +11,8 @@ public static class SectionBody
     /// <summary>Largest accepted body, bytes; the same limit as every other body.</summary>
     public const int MaxBytes = RequestBody.MaxBytes;
 
-    /// <summary>The validated model and the JSON as posted; or the refusal of the body (413, 415); or the problems.</summary>
+    /// <summary>The validated model and the JSON as posted; or the refusal of the body (413, 415); or the
+    /// problems.</summary>
     public sealed record Outcome(SectionModel? Model, string? Json, IReadOnlyList<SectionProblem> Problems,
         ProblemHttpResult? Refusal)
     {
@@ -26,8 +27,8 @@ public static class SectionBody
         if (body.Refusal is { } refusal) return new Outcome(null, null, [], refusal);
         string json = body.Text;
         if (string.IsNullOrWhiteSpace(json))
-            return new Outcome(null, json, [new SectionProblem("", "The body is empty; post a section document (JSON object).")],
-                null);
+            return new Outcome(null, json,
+                [new SectionProblem("", "The body is empty; post a section document (JSON object).")], null);
         var document = SectionParser.Parse(json, out var parseProblems);
         if (document is null) return new Outcome(null, json, parseProblems, null);
         var outcome = SectionValidator.Validate(document);

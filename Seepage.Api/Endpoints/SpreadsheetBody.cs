@@ -27,13 +27,15 @@ public static class SpreadsheetBody
         var form = await request.ReadFormAsync(cancellation);
         var file = form.Files.FirstOrDefault();
         if (file is null)
-            return new(null, ApiProblems.Unreadable("The form holds no file; attach the spreadsheet (.csv or .xlsx) as a file field."));
+            return new(null, ApiProblems.Unreadable(
+                "The form holds no file; attach the spreadsheet (.csv or .xlsx) as a file field."));
         if (file.Length > RequestBody.MaxBytes) return new(null, ApiProblems.TooLarge(what));
         string type = file.FileName.EndsWith(".xlsx", StringComparison.OrdinalIgnoreCase) ? RequestBody.Xlsx
             : file.FileName.EndsWith(".csv", StringComparison.OrdinalIgnoreCase) ? RequestBody.Csv
             : RequestBody.MediaType(file.ContentType);
         if (type is not (RequestBody.Csv or RequestBody.Xlsx))
-            return new(null, ApiProblems.UnsupportedType(type, [".csv or .xlsx file in the form", RequestBody.Csv, RequestBody.Xlsx]));
+            return new(null, ApiProblems.UnsupportedType(type,
+                [".csv or .xlsx file in the form", RequestBody.Csv, RequestBody.Xlsx]));
         await using var source = file.OpenReadStream();
         var bytes = await RequestBody.ReadBoundedAsync(source, cancellation);
         return bytes is null ? new(null, ApiProblems.TooLarge(what)) : Read(bytes, type);
@@ -42,7 +44,8 @@ public static class SpreadsheetBody
     private static Outcome Read(byte[] bytes, string type)
     {
         if (bytes.Length == 0) return new(null, ApiProblems.Unreadable("The body is empty; send a spreadsheet."));
-        if (type == RequestBody.Csv) return new(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes)), null);
+        if (type == RequestBody.Csv)
+            return new(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes)), null);
         try
         {
             using var workbook = new MemoryStream(bytes);

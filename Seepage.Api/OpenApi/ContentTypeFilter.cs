@@ -55,5 +55,6 @@ public sealed class ContentTypeFilter : IOperationFilter
     private static OpenApiSchema Binary() => new() { Type = JsonSchemaType.String, Format = "binary" };
 
     private static string ReasonPhrase(int status) =>
-        Microsoft.AspNetCore.WebUtilities.ReasonPhrases.GetReasonPhrase(status) is { Length: > 0 } phrase ? phrase : "Answer";
+        Microsoft.AspNetCore.WebUtilities.ReasonPhrases.GetReasonPhrase(status) is { Length: > 0 } phrase
+            ? phrase : "Answer";
 }

@@ -46,7 +46,8 @@ public sealed record ParameterNote(string Name, string Description)
         "Id of a study, as returned by POST /api/v1/studies (the Location header and the study's id).");
 
     /// <summary>The name of a shipped example.</summary>
-    public static readonly ParameterNote ExampleName = new("name", "Name of an example section, as listed by GET /api/v1/examples.");
+    public static readonly ParameterNote ExampleName = new("name",
+        "Name of an example section, as listed by GET /api/v1/examples.");
 
     /// <summary>The base section of a CSV study.</summary>
     public static readonly ParameterNote StudyBase = new("base",

@@ -6,6 +6,7 @@ namespace Seepage.Api.Tests;
 
 /// <summary>The other entry points under bad input: studies with random changes and spreadsheet imports of damaged
 /// text never reach a server error (RFC 9457 problem details for client errors; common practice).</summary>
+[Trait("Category", "Slow")]
 public class BadInputOtherEndpointsTests
 {
     private static readonly string[] Pointers =

@@ -11,6 +11,7 @@ namespace Seepage.Api.Tests;
 /// with 201 or with 400 problem details that name a member (or 422 problem details with the solver's figures when
 /// a valid section does not converge); never a server error, never a lost answer (RFC 9457 problem details).
 /// </summary>
+[Trait("Category", "Slow")]
 public class BadInputTests
 {
     // Trials per example in the test run; 1,500 per example were run by hand while hardening the validator.

@@ -56,7 +56,8 @@ public class ErrorVocabularyTests
     public async Task Post_UnknownQueryValue_400NamingParameter(string path, string parameter)
     {
         using var factory = new SeepageFactory();
-        var response = await factory.CreateClient().PostAsync(path, new StringContent("{}", Encoding.UTF8, "application/json"));
+        var body = new StringContent("{}", Encoding.UTF8, "application/json");
+        var response = await factory.CreateClient().PostAsync(path, body);
         var problem = await Problem(response, HttpStatusCode.BadRequest);
         Assert.True(problem.GetProperty("errors").TryGetProperty(parameter, out _), problem.ToString());
     }

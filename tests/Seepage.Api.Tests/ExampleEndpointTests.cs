@@ -6,6 +6,7 @@ namespace Seepage.Api.Tests;
 
 public class ExampleEndpointTests
 {
+    [Trait("Category", "Slow")]
     [Fact]
     public async Task Examples_EachAnalyses_201()
     {

@@ -36,7 +36,8 @@ public static class GeneratedClient
         var references = ((string)AppContext.GetData("TRUSTED_PLATFORM_ASSEMBLIES")!).Split(Path.PathSeparator)
             .Where(p => p.EndsWith(".dll", StringComparison.Ordinal)).Select(p => MetadataReference.CreateFromFile(p));
         var compilation = CSharpCompilation.Create("Generated.SeepageClient", [tree], references,
-            new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Disable));
+            new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary,
+                nullableContextOptions: NullableContextOptions.Disable));
         using var image = new MemoryStream();
         var emitted = compilation.Emit(image);
         var errors = emitted.Diagnostics.Where(d => d.Severity == DiagnosticSeverity.Error).ToList();

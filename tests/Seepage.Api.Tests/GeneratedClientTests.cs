@@ -4,11 +4,13 @@ namespace Seepage.Api.Tests;
 
 /// <summary>The OpenAPI document is good enough for a client generator: NSwag writes a C# client from it, the client
 /// compiles, and it calls the running API (typed results, typed problem details) for a few operations.</summary>
+[Trait("Category", "Slow")]
 public class GeneratedClientTests
 {
     private static async Task<object> Call(object client, string method, params object?[] arguments)
     {
-        var info = client.GetType().GetMethods().Single(m => m.Name == method && m.GetParameters().Length == arguments.Length);
+        var info = client.GetType().GetMethods()
+            .Single(m => m.Name == method && m.GetParameters().Length == arguments.Length);
         var task = (Task)info.Invoke(client, arguments)!;
         await task;
         return task.GetType().GetProperty("Result")!.GetValue(task)!;
@@ -41,8 +43,10 @@ public class GeneratedClientTests
         Assert.Equal(flow, (double)Get(Get(stored, "Flow")!, "PerMetre")!);
 
         // A query enum becomes a C# enum; the PDF arrives as a binary file response.
-        var report = clientType.GetMethods().Single(m => m.Name == "GetAnalysisReportAsync" && m.GetParameters().Length == 2);
-        var formatType = Nullable.GetUnderlyingType(report.GetParameters()[1].ParameterType) ?? report.GetParameters()[1].ParameterType;
+        var report = clientType.GetMethods()
+            .Single(m => m.Name == "GetAnalysisReportAsync" && m.GetParameters().Length == 2);
+        var declared = report.GetParameters()[1].ParameterType;
+        var formatType = Nullable.GetUnderlyingType(declared) ?? declared;
         object file = await Call(client, "GetAnalysisReportAsync", id, Enum.Parse(formatType, "Html", ignoreCase: true));
         using (var reader = new StreamReader((Stream)Get(file, "Stream")!))
             Assert.Contains("<html", await reader.ReadToEndAsync(), StringComparison.OrdinalIgnoreCase);

@@ -10,7 +10,8 @@ public class OpenApiDocumentTests
     private static async Task<JsonElement> Document()
     {
         using var factory = new SeepageFactory();
-        return JsonDocument.Parse(await factory.CreateClient().GetStringAsync("/swagger/v1/swagger.json")).RootElement.Clone();
+        string json = await factory.CreateClient().GetStringAsync("/swagger/v1/swagger.json");
+        return JsonDocument.Parse(json).RootElement.Clone();
     }
 
     private static IEnumerable<(string Path, string Method, JsonElement Operation)> Operations(JsonElement doc) =>
@@ -84,7 +85,8 @@ public class OpenApiDocumentTests
             study.GetProperty("application/json").GetProperty("schema").GetProperty("$ref").GetString());
         Assert.True(study.TryGetProperty("text/csv", out _));
         var report = Content("/api/v1/analyses/{id}/report", "200");
-        Assert.Equal("binary", report.GetProperty("application/pdf").GetProperty("schema").GetProperty("format").GetString());
+        var pdf = report.GetProperty("application/pdf").GetProperty("schema");
+        Assert.Equal("binary", pdf.GetProperty("format").GetString());
         Assert.True(report.TryGetProperty("text/html", out _));
         Assert.True(Content("/api/v1/analyses/{id}/uplift.csv", "200").TryGetProperty("text/csv", out _));
         Assert.True(Content("/api/v1/sections/template.xlsx", "200")
@@ -115,7 +117,8 @@ public class OpenApiDocumentTests
             Assert.True(Nullable(name), name + " should be nullable");
 
         var section = schemas.GetProperty("SectionDocument");
-        Assert.Equal(["heads", "soils", "zones"], section.GetProperty("required").EnumerateArray().Select(r => r.GetString()));
+        Assert.Equal(["heads", "soils", "zones"],
+            section.GetProperty("required").EnumerateArray().Select(r => r.GetString()));
         Assert.Equal(["id", "kx"], schemas.GetProperty("SoilDocument").GetProperty("required").EnumerateArray()
             .Select(r => r.GetString()));
     }

@@ -58,6 +58,7 @@ public class ReportEndpointTests
         Assert.Matches(@"wall 0\.60* m, kx 1\.000E-06 m/s", html);
     }
 
+    [Trait("Category", "Slow")]
     [Fact]
     public async Task Report_Pdf_OpensAndHoldsCautionAndChecksHeadings()
     {

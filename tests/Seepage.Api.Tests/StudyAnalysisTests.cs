@@ -6,6 +6,7 @@ using System.Text.Json.Nodes;
 namespace Seepage.Api.Tests;
 
 /// <summary>Studies and spreadsheet imports that run analyses through the API.</summary>
+[Trait("Category", "Slow")]
 public class StudyAnalysisTests
 {
     private static async Task<JsonElement> ReadJson(HttpResponseMessage response) =>

@@ -11,6 +11,7 @@ public class ExitProfileTests
     // default linear mesh is not accurate enough for a 3 % point check, so order 2 is used.
     private const double T = 10, S = 5, H = 4, Width = 80;
 
+    [Trait("Category", "Slow")]
     [Fact]
     public void Analysis_QuadraticElements_ExitProfileWithinThreePercent()
     {

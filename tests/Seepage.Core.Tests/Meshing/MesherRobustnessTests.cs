@@ -13,6 +13,7 @@ public class MesherRobustnessTests
 
     private static double Area(Mesh m) => MeshChecks.ZoneAreas(m, m.Zones.Max() + 1).Sum();
 
+    [Trait("Category", "Slow")]
     [Fact]
     public void Build_ThinLayer_TerminatesWithValidMesh()
     {

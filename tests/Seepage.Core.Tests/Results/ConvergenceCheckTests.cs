@@ -9,6 +9,7 @@ public class ConvergenceCheckTests(Xunit.Abstractions.ITestOutputHelper output)
     // With quadratic elements the convergence check must run at order 2, and its error estimate must be honest:
     // the Richardson estimate lies closer to kH/2 than the analysis-mesh value, and the estimated error of the
     // analysis-mesh flow is within a factor of three of its true error against kH/2.
+    [Trait("Category", "Slow")]
     [Fact]
     public void Run_QuadraticElements_ErrorEstimateMatchesExactFlow()
     {

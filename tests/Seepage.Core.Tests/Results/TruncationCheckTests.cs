@@ -23,6 +23,7 @@ public class TruncationCheckTests
     // With quadratic elements the extra solve must use them too: at 8T the wider section's flow lies within 0.2 %
     // of the exact k·H/2 for s/T = 1/2 (Harr 1962, K(m′)/(2K(m)) = 1/2), where linear elements on this mesh are
     // about 0.7 % high; at 0.6T the check still warns.
+    [Trait("Category", "Slow")]
     [Theory]
     [InlineData(6, true)]
     [InlineData(80, false)]

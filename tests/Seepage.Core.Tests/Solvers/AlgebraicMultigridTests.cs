@@ -42,6 +42,7 @@ public class AlgebraicMultigridTests
         Assert.True(error <= 1e-10, $"relative difference {error:E2} after {report.Iterations} iterations");
     }
 
+    [Trait("Category", "Slow")]
     [Fact]
     public void Solve_Anisotropy100Refined_ConvergesInFewIterations()
     {
@@ -54,6 +55,7 @@ public class AlgebraicMultigridTests
 
     // Multigrid's promise: iterations nearly independent of h. Three refinements (each halves h), assert
     // max/min ≤ 2; the table is printed on failure.
+    [Trait("Category", "Slow")]
     [Fact]
     public void Solve_ThreeRefinements_IterationCountsWithinFactorTwo()
     {

@@ -13,6 +13,7 @@ public class StudyRunnerTests
     private static StudyAlternative Tip(double y) =>
         new($"downstream pile tip at {y} m", [new("/cutoffs/1/tip/1", JsonValue.Create(y))]);
 
+    [Trait("Category", "Slow")]
     [Fact]
     public void Run_FiveCutoffDepths_FlowFallsWithDepthAndRowsMatchSingleAnalyses()
     {
