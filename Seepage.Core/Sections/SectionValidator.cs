@@ -20,14 +20,11 @@ public static class SectionValidator
         var warnings = new List<string>();
         var reader = new PointReader(problems);
 
-        if (doc.Extra is { Count: > 0 })
-            foreach (var key in doc.Extra.Keys)
-                warnings.Add($"Unknown member '{key}' at the top level was ignored.");
-
-        double unitFactor = 1;
-        string unit = doc.ConductivityUnit ?? "m/s";
-        if (!ConductivityUnits.ToMetresPerSecond.TryGetValue(unit, out unitFactor))
-            problems.Add(new("/conductivityUnit", $"'{unit}' is not a known unit; use one of {string.Join(", ", ConductivityUnits.ToMetresPerSecond.Keys)}."));
+        doc = SectionUnits.ToSi(doc, problems);
+        // An unknown unit is one problem: NaN keeps the conductivity range checks from adding follow-on ones.
+        string? unit = SectionEnumerations.Read(doc.ConductivityUnit, "m/s", SectionEnumerations.ConductivityUnits,
+            "/conductivityUnit", problems);
+        double unitFactor = unit is null ? double.NaN : ConductivityUnits.ToMetresPerSecond[unit];
 
         double gammaW = doc.WaterUnitWeight ?? 9.81;
         if (!double.IsFinite(gammaW) || gammaW < 5 || gammaW > 15)
@@ -113,8 +110,10 @@ public static class SectionValidator
             if (s.SpecificGravity is { } gs && (!double.IsFinite(gs) || gs <= 1 || gs > 5)) problems.Add(new($"{at}/specificGravity", "must lie between 1 and 5."));
             if (s.VoidRatio is { } e && (!double.IsFinite(e) || e <= 0 || e > 10)) problems.Add(new($"{at}/voidRatio", "must lie between 0 and 10."));
             if (s.SaturatedUnitWeight is { } gsat && (!double.IsFinite(gsat) || gsat <= 0)) problems.Add(new($"{at}/saturatedUnitWeight", "must be a positive unit weight in kN/m³."));
+            string? creepClass = s.CreepClass is null ? null
+                : SectionEnumerations.Read(s.CreepClass, "", SectionEnumerations.CreepClasses, $"{at}/creepClass", problems);
             soils.Add(new Soil(s.Id ?? $"soil {i}", kx * unitFactor, ky * unitFactor, angle, s.SpecificGravity, s.VoidRatio,
-                s.SaturatedUnitWeight, s.CreepClass));
+                s.SaturatedUnitWeight, creepClass));
         }
         return soils;
     }
