@@ -69,7 +69,7 @@ internal static class SheetBlockScanner
             string? column = SectionSheetLayout.ColumnNamed(block, text);
             var cell = new CellRef(sheet.Name, r + 1, j + 1);
             if (column is null)
-                problems.Add(new ImportProblem(cell, $"'{text}' is not a column of the '{block}' block; its columns are " +
+                problems.Add(new ImportProblem(cell, $"'{SafeText.Of(text)}' is not a column of the '{block}' block; its columns are " +
                     string.Join(", ", SectionSheetLayout.Columns[block]) + "."));
             else if (!columns.TryAdd(column, j))
                 problems.Add(new ImportProblem(cell, $"The column '{column}' appears twice in the '{block}' block."));
