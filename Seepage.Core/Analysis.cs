@@ -51,8 +51,10 @@ public static class Analysis
         }
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
-        return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
+        var result = new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
             clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
+        FiniteResultGuard.Check(result);
+        return result;
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>

@@ -13,6 +13,7 @@ public static class SectionParser
         ReadCommentHandling = JsonCommentHandling.Skip,
         AllowTrailingCommas = true,
         MaxDepth = 32,
+        AllowDuplicateProperties = false,
     };
 
     /// <summary>Parses <paramref name="json"/>; returns the document, or null with the problems.</summary>
@@ -75,7 +76,7 @@ public static class SectionParser
     }
 
     /// <summary>Turns a System.Text.Json path such as <c>$.soils[0].kx</c> into the pointer <c>/soils/0/kx</c>.</summary>
-    internal static string ToPointer(string? path)
+    public static string ToPointer(string? path)
     {
         if (string.IsNullOrEmpty(path) || path == "$") return "";
         var sb = new System.Text.StringBuilder();

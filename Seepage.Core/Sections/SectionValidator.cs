@@ -55,6 +55,7 @@ public static class SectionValidator
         var drains = ReadPolylines(doc.Drains?.Select(d => d is null ? null : Entry(d.Name, d.Along)).ToList(), "/drains", "along", "drain",
             "the drain polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
+        BoundaryConflictCheck.Check(doc, tolerance * 10, problems);
         var walls = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
         var cutoffs = walls.Cutoffs;
 
@@ -70,8 +71,8 @@ public static class SectionValidator
 
         var gauges = ReadGauges(doc.Gauges, reader, problems);
 
-        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
-            problems.Add(new("/structureLength", "must be a positive length in metres."));
+        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0 || len > PointReader.LargestCoordinate))
+            problems.Add(new("/structureLength", "must be a positive length in metres, at most 1,000,000 m."));
 
         if (problems.Count > 0 || zones is null || exit is null || mesh is null)
             return new ValidationOutcome(null, problems);
