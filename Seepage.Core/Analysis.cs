@@ -43,9 +43,11 @@ public static class Analysis
         var convergence = section.Mesh.ConvergenceCheck
             ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
         stage("convergence");
-        var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
-            ? TruncationCheck.Run(section, flow.PerMetre, section.Mesh.Order, s => MakeMesh(s, [], cancellation), options.Solver, warnings, cancellation)
-            : null;
+        // The first-order estimate costs nothing and always runs unless the section turns the check off; the wider
+        // solve follows where needed when asked for, or automatically for small models.
+        var truncation = section.TruncationCheck == false ? null
+            : TruncationCheck.Run(section, solution, flow.PerMetre, s => MakeMesh(s, [], cancellation), options.Solver,
+                section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles, warnings, cancellation);
         stage("truncation");
 
         FlowNet? net = null;
