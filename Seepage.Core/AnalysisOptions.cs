@@ -13,4 +13,8 @@ public sealed record AnalysisOptions
 
     /// <summary>Number of equal head drops of the flow net. Default 12.</summary>
     public int HeadDrops { get; init; } = Results.FlowNetBuilder.DefaultHeadDrops;
+
+    /// <summary>Called on the analysing thread after each stage with its name (mesh, assembly, solve, figures,
+    /// convergence, truncation, streamFunction, flowNet), e.g. for a benchmark to read a clock. Default none.</summary>
+    public Action<string>? StageDone { get; init; }
 }
