@@ -8,7 +8,7 @@ using static Seepage.Core.Tests.Support.Sections;
 
 namespace Seepage.Core.Tests.TargetSearch;
 
-public class SheetPileTargetTests(ITestOutputHelper output)
+public class SheetPileTargetTests(Xunit.Abstractions.ITestOutputHelper output)
 {
     // Single sheet pile of penetration s in a layer of thickness T (Harr, "Groundwater and Seepage", 1962, ch. 5): the exit
     // gradient at the downstream face is i_E = πH / (4T·K(m)·m), m = sin(πs/2T). With Gs = 2.65, e = 0.65 the critical
