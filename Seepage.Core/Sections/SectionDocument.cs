@@ -32,6 +32,10 @@ public sealed record SectionDocument
     /// distance from the structures tells whether the truncation changes the flow by more than 1% (default false;
     /// done automatically for models of fewer than 20,000 triangles).</summary>
     public bool? TruncationCheck { get; init; }
+    /// <summary>Flow-net drawing options (optional).</summary>
+    public FlowNetDocument? FlowNet { get; init; }
+    /// <summary>Title block of the design memo: project, job number, prepared/checked by, revision (optional).</summary>
+    public TitleBlockDocument? TitleBlock { get; init; }
 
     [JsonExtensionData]
     public Dictionary<string, object>? Extra { get; init; }

@@ -39,6 +39,9 @@ public sealed record SectionModel(
     /// Null means "automatically for small models".</summary>
     public bool? TruncationCheck { get; init; }
 
+    /// <summary>Head drops Nd of the flow net from <c>flowNet.headDrops</c>; null chooses Nd for square cells.</summary>
+    public int? FlowNetHeadDrops { get; init; }
+
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }

@@ -72,6 +72,7 @@ public static class SectionValidator
         var mesh = ReadMesh(doc.Mesh, zones, cutoffs, domain, problems);
 
         var gauges = ReadGauges(doc.Gauges, reader, problems);
+        int? headDrops = FlowNetReader.HeadDrops(doc.FlowNet, problems);
 
         if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
             problems.Add(new("/structureLength", "must be a positive length in metres."));
@@ -86,7 +87,8 @@ public static class SectionValidator
         }
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck };
+            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck,
+              FlowNetHeadDrops = headDrops };
         return new ValidationOutcome(model, problems);
     }
 
