@@ -58,7 +58,14 @@ public static class Analysis
             stage("streamFunction");
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
-            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops);
+            var reference = ConductivityTensor.Of(exitSoil);
+            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, reference.Mean,
+                options.HeadDrops ?? section.FlowNetHeadDrops) with
+            {
+                ReferenceSoil = exitSoil.Id,
+                UniformIsotropic = exitSoil.Kx == exitSoil.Ky
+                    && section.Zones.All(z => section.Soils[z.Soil] is var s && s.Kx == exitSoil.Kx && s.Ky == exitSoil.Ky),
+            };
             stage("flowNet");
         }
         if (Math.Abs(flow.Balance) > 1e-6)

@@ -43,6 +43,10 @@ public sealed record SectionDocument
     public bool? Unconfined { get; init; }
     /// <summary>Boundary polylines where water may leave at atmospheric pressure (unconfined sections).</summary>
     public List<SeepageFaceDocument>? SeepageFaces { get; init; }
+    /// <summary>Flow-net drawing options (optional).</summary>
+    public FlowNetDocument? FlowNet { get; init; }
+    /// <summary>Title block of the design memo: project, job number, prepared/checked by, revision (optional).</summary>
+    public TitleBlockDocument? TitleBlock { get; init; }
 
     /// <summary>Extension members (names starting with "x-"): kept with the posted section, ignored by the analysis.
     /// Any other unknown member is refused by <see cref="SectionParser"/>.</summary>

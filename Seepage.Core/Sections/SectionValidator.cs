@@ -82,6 +82,7 @@ public static class SectionValidator
             problems.Add(new("/mesh/order", "an unconfined section is solved with linear triangles (order 1) only."));
 
         var gauges = ReadGauges(doc.Gauges, reader, problems);
+        int? headDrops = FlowNetReader.HeadDrops(doc.FlowNet, problems);
 
         if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0 || len > PointReader.LargestCoordinate))
             problems.Add(new("/structureLength", "must be a positive length in metres, at most 1,000,000 m."));
@@ -96,7 +97,12 @@ public static class SectionValidator
         }
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces };
+        var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
+            exit, heaveFactor, mesh, doc.StructureLength, warnings)
+        {
+            Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces,
+            FlowNetHeadDrops = headDrops,
+        };
         return new ValidationOutcome(model, problems);
     }
 
