@@ -97,7 +97,6 @@ public static class SectionValidator
         }
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-        var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
             exit, heaveFactor, mesh, doc.StructureLength, warnings)
         {
             Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces,
