@@ -23,7 +23,8 @@ public static class SectionParser
         try { parsed = JsonDocument.Parse(json, DocumentOptions); }
         catch (JsonException ex)
         {
-            problems = [new SectionProblem(ToPointer(ex.Path), Describe(ex))];
+            problems = [new SectionProblem(ex.Path is null ? JsonSyntaxLocator.PointerOfFailure(json) : ToPointer(ex.Path),
+                Describe(ex))];
             return null;
         }
         using (parsed)
