@@ -84,9 +84,8 @@ public sealed class UncertaintyService(DesignRunStore store, RunningJobs jobs, I
         var options = new SolverOptions { TimeBudget = AnalysisService.SolveBudget };
         try
         {
-            var result = await Task.Run(() => UncertaintyRunner.Run(baseSection, baseModel, run.Study, options,
-                fosm => { lock (run) run.Fosm = fosm; }, sample => Finish(run, sample, cancellation), cancellation), cancellation);
-            lock (run) run.Method = result.Method;
+            await Task.Run(() => UncertaintyRunner.Run(baseSection, baseModel, run.Study, options,
+                (fosm, method) => { lock (run) { run.Fosm = fosm; run.Method = method; } }, sample => Finish(run, sample, cancellation), cancellation), cancellation);
             run.Status = "done";
         }
         catch (OperationCanceledException) { run.Status = "cancelled"; }
