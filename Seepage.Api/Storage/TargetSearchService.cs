@@ -59,11 +59,12 @@ public sealed class TargetSearchService(DesignRunStore store, AnalysisStore anal
     private async Task ExecuteAsync(Run run, JsonObject baseSection, CancellationToken cancellation)
     {
         var options = new AnalysisOptions { Solver = new SolverOptions { TimeBudget = AnalysisService.SolveBudget } };
+        string baseJson = baseSection.ToJsonString();
         try
         {
             run.Result = await Task.Run(() => TargetSearcher.Run(run.Search, value =>
             {
-                var (point, result) = TargetEvaluator.Evaluate(baseSection, run.Search, value, options, cancellation);
+                var (point, result) = TargetEvaluator.Evaluate(baseJson, run.Search, value, options, cancellation);
                 string? analysisId = result is null ? null : AnalysisRecords.Save(analyses, result, point.Row.SectionJson ?? "{}", cancellation);
                 string json;
                 lock (run)

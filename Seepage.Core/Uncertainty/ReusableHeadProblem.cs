@@ -9,7 +9,7 @@ namespace Seepage.Core.Uncertainty;
 /// The head problem of one geometry, kept for many samples that change only conductivities and heads: the mesh, its
 /// boundary, the unknown numbering and the CSR sparsity pattern are built once; each sample re-assembles the values of K
 /// for its own zone tensors, fixes its heads, condenses K_FF h_F = −K_FD h_D and solves by CG to the usual tolerance.
-/// The preconditioner is one AMG hierarchy built for a centre section (the variables at their medians): any SPD
+/// The preconditioner is the AMG hierarchy of a centre section (the variables at their medians): any SPD
 /// preconditioner gives the same converged answer, and one close to every sample's K costs a few more iterations instead of
 /// a new setup per sample. A sample whose CG does not converge within <see cref="ReuseIterations"/> with it is solved again
 /// with its own hierarchy.
@@ -17,7 +17,11 @@ namespace Seepage.Core.Uncertainty;
 public sealed class ReusableHeadProblem
 {
     private readonly SparsityPattern _pattern;
-    private IPreconditioner? _shared;
+    // An AMG hierarchy holds work vectors, so each concurrent sample takes its own copy from the pool (built on demand
+    // from the centre matrix: at most one per worker thread).
+    private readonly System.Collections.Concurrent.ConcurrentBag<IPreconditioner> _pool = [];
+    private CsrMatrix? _centre;
+    private SolverOptions _centreOptions = new();
     private readonly double[][]? _unitValues;
 
     /// <summary>Largest number of stored unit-tensor values (3 per zone per nonzero) for assembly by linear combination.</summary>
@@ -84,20 +88,25 @@ public sealed class ReusableHeadProblem
 
     private bool SolvedWithShared(LinearSystem system, double[] free, SolverOptions options, CancellationToken cancellation)
     {
-        if (_shared is null) return false;
+        if (_centre is null) return false;
+        if (!_pool.TryTake(out var shared)) shared = new AlgebraicMultigridPreconditioner(_centre, _centreOptions, cancellation);
         try
         {
-            ConjugateGradient.Solve(system.Matrix, system.Rhs, free, _shared, options with { MaxIterations = ReuseIterations }, cancellation);
+            ConjugateGradient.Solve(system.Matrix, system.Rhs, free, shared, options with { MaxIterations = ReuseIterations }, cancellation);
             return true;
         }
         catch (SolverNotConvergedException) { return false; }
+        finally { _pool.Add(shared); }
     }
 
     /// <summary>Builds the shared AMG hierarchy from the centre section's K_FF.</summary>
     public void SharePreconditioner(SectionModel centre, SolverOptions options, CancellationToken cancellation)
     {
         var system = LinearSystem.Condense(Assemble(Tensors(centre)), FixedHeads(centre));
-        if (system.Matrix.Size > 0) _shared = new AlgebraicMultigridPreconditioner(system.Matrix, options, cancellation);
+        if (system.Matrix.Size == 0) return;
+        _centre = system.Matrix;
+        _centreOptions = options;
+        _pool.Add(new AlgebraicMultigridPreconditioner(_centre, options, cancellation));
     }
 
     /// <summary>Assembles, solves and reads the figures of one sample with this geometry.</summary>

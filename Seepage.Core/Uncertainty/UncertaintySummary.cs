@@ -14,7 +14,7 @@ public sealed record UncertaintySummary(int Analysed, int Failed, IReadOnlyDicti
 
     public static UncertaintySummary Of(UncertaintyStudy study, IReadOnlyList<SampleOutcome> outcomes)
     {
-        var good = outcomes.Where(o => o.Figures is not null).ToList();
+        var good = outcomes.Where(o => o.Figures is not null).OrderBy(o => o.Index).ToList(); // the same order on every run
         var figures = new Dictionary<string, FigureStatistics>();
         var sensitivity = study.Variables.Select(v => v.Member).Distinct()
             .ToDictionary(m => m, _ => (IReadOnlyDictionary<string, double>)new Dictionary<string, double>());
