@@ -2,7 +2,7 @@
 // (Monte Carlo over conductivities and heads). The server does every computation; this module posts the request built from
 // the form and the editor's section, follows the progress and shows the answer with links to the memo and the exports.
 
-import { html, clear } from './dom.js';
+import { html, svg, clear } from './dom.js';
 import { sig } from './format.js';
 
 const BASE = 'api/v1';
@@ -75,6 +75,9 @@ function showSearch(target, s, link) {
     s.intervals.length > 1 ? html('p', {}, 'Feasible intervals: ' + s.intervals.map(i => `${sig(i.from)} … ${sig(i.to)}`).join('; ')) : '',
     table([s.member, 'flow m³/s per m', 'uplift kN/m', 'exit factor', 'heave factor', 'result'],
       s.points.map(p => [sig(p.value), sig(p.flow), sig(p.upliftForce), sig(p.exitFactor), sig(p.heaveFactor), p.pass ? 'meets all' : 'fails'])),
+    html('div', { class: 'design-charts' },
+      s.points.length > 1 ? curve(s.points.map(p => [p.value, p.exitFactor]), `factor against piping vs ${s.member}`, s.require.exitFactor, s.value) : '',
+      s.points.length > 1 ? curve(s.points.map(p => [p.value, p.heaveFactor]), `factor against heave vs ${s.member}`, s.require.heaveFactor, s.value) : ''),
     links(link, [['report', 'Memo with the curves'], ['points.csv', 'Points CSV'], ['points.xlsx', 'Points workbook']]));
 }
 
@@ -86,7 +89,47 @@ function showStudy(target, u, link) {
       figures.map(([name, f]) => [name, f.unit, sig(f.mean), sig(f.sd), sig(f.p05), sig(f.p50), sig(f.p95), sig(u.fosm[name]?.mean), sig(u.fosm[name]?.sd)])),
     table(['check', 'required factor', 'p_f', 'standard error', 'β'],
       Object.entries(u.checks).map(([name, c]) => [name, sig(c.requiredFactor), c.upperBound ? `0 (< ${sig(c.upperBound)})` : sig(c.probabilityOfFailure), sig(c.standardError), c.beta == null ? '—' : sig(c.beta)])),
+    html('div', { class: 'design-charts' },
+      ['exitFactor', 'heaveFactor'].filter(n => u.figures[n]).map(n => histogram(u.figures[n].histogram, `${n} over ${u.figures[n].count} samples`,
+        u.checks[n === 'exitFactor' ? 'exit' : 'heave']?.requiredFactor))),
     links(link, [['report', 'Memo with the histograms'], ['samples.csv', 'Samples CSV'], ['samples.xlsx', 'Samples workbook']]));
+}
+
+// Small SVG charts of server figures (no computation here beyond placing points): W × H pixels, data mapped linearly.
+const W = 320, H = 170, PAD = 34;
+
+function frame(title, x0, x1, y0, y1, items) {
+  const sx = x => PAD + (x - x0) / ((x1 - x0) || 1) * (W - PAD - 8), sy = y => H - PAD + 10 - (y - y0) / ((y1 - y0) || 1) * (H - PAD - 10);
+  return html('figure', { class: 'design-chart' },
+    svg('svg', { viewBox: `0 0 ${W} ${H}`, width: W, height: H, role: 'img', 'aria-label': title },
+      svg('rect', { x: PAD, y: 10, width: W - PAD - 8, height: H - PAD - 10, fill: 'none', stroke: '#999' }),
+      svg('text', { x: PAD, y: H - 8, 'font-size': 10 }, sig(x0)), svg('text', { x: W - 8, y: H - 8, 'font-size': 10, 'text-anchor': 'end' }, sig(x1)),
+      svg('text', { x: PAD - 3, y: H - PAD + 10, 'font-size': 10, 'text-anchor': 'end' }, sig(y0)),
+      svg('text', { x: PAD - 3, y: 18, 'font-size': 10, 'text-anchor': 'end' }, sig(y1)),
+      ...items(sx, sy).flat(2)),
+    html('figcaption', {}, title));
+}
+
+function curve(points, title, requirement, found) {
+  const pts = points.filter(p => p[1] != null).sort((a, b) => a[0] - b[0]);
+  if (pts.length < 2) return '';
+  const xs = pts.map(p => p[0]), ys = pts.map(p => p[1]).concat(requirement ?? []);
+  const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+  return frame(title, x0, x1, y0, y1, (sx, sy) => [
+    svg('polyline', { points: pts.map(p => `${sx(p[0])},${sy(p[1])}`).join(' '), fill: 'none', stroke: '#1f5fbf', 'stroke-width': 1.5 }),
+    pts.map(p => svg('circle', { cx: sx(p[0]), cy: sy(p[1]), r: 2.2, fill: '#1f5fbf' })),
+    requirement == null ? '' : svg('line', { x1: sx(x0), x2: sx(x1), y1: sy(requirement), y2: sy(requirement), stroke: '#b03a2e', 'stroke-dasharray': '5 3' }),
+    found == null ? '' : svg('line', { x1: sx(found), x2: sx(found), y1: sy(y0), y2: sy(y1), stroke: '#2a9d4a', 'stroke-width': 1.5 }),
+  ]);
+}
+
+function histogram(h, title, allowable) {
+  const edges = h.edges, counts = h.counts, top = Math.max(1, ...counts);
+  const x0 = Math.min(edges[0], allowable ?? Infinity), x1 = Math.max(edges[edges.length - 1], allowable ?? -Infinity);
+  return frame(title, x0, x1, 0, top, (sx, sy) => [
+    counts.map((c, i) => c === 0 ? '' : svg('rect', { x: sx(edges[i]), y: sy(c), width: Math.max(0.5, sx(edges[i + 1]) - sx(edges[i])), height: sy(0) - sy(c), fill: '#9db7e0', stroke: '#1f5fbf', 'stroke-width': 0.5 })),
+    allowable == null ? '' : svg('line', { x1: sx(allowable), x2: sx(allowable), y1: sy(0), y2: sy(top), stroke: '#b03a2e', 'stroke-width': 1.5, 'stroke-dasharray': '5 3' }),
+  ]);
 }
 
 function table(headers, rows) {

@@ -18,11 +18,13 @@ public sealed class DesignRunTests(BrowserFixture fixture)
         Assert.Contains("flow", text);
         Assert.Contains("p_f", text);
         Assert.Contains("Memo with the histograms", text);
+        Assert.True(await page.Locator(".design-chart svg rect").CountAsync() > 2, "the histograms should be drawn");
 
         await page.FillAsync("#target-form input[name=to]", "-9");
         await page.ClickAsync("#target-form button[type=submit]");
         await page.Locator(".design-out").GetByText("meets every requirement").WaitForAsync(new() { Timeout = 180_000 });
         Assert.Contains("Memo with the curves", await page.Locator(".design-out").InnerTextAsync());
+        Assert.Equal(2, await page.Locator(".design-chart polyline").CountAsync());
         await session.ScreenshotAsync("design-questions");
         session.AssertNoConsoleErrors();
     }
