@@ -46,7 +46,8 @@ public static class TargetSearchBody
                 errors[$"/range/{end}"] = problems.Select(p => FormattableString.Invariant($"with {member} = {range[end]:G}: {p.Pointer} {p.Message}")).ToArray();
         }
         if (errors.Count > 0) return new Outcome(null, null, errors);
-        var search = new TargetSearch(member, range[0], range[1], require, tolerance ?? TargetSearch.DefaultTolerance(range[0], range[1]), scan);
+        var search = new TargetSearch(member, range[0], range[1], require, tolerance ?? TargetSearch.DefaultTolerance(range[0], range[1]), scan,
+            RequirementsDefaulted: root["require"] is null);
         return new Outcome(section, search, errors);
     }
 

@@ -22,6 +22,7 @@ public sealed class TargetSearchService(DesignRunStore store, AnalysisStore anal
         public readonly DateTimeOffset Created = DateTimeOffset.UtcNow;
         public readonly Stopwatch Clock = Stopwatch.StartNew();
         public readonly List<TargetPointDto> Points = [];
+        public readonly Dictionary<double, string?> AnalysisIds = [];
         public TargetSearchResult? Result;
         public string Status = "running";
     }
@@ -70,11 +71,18 @@ public sealed class TargetSearchService(DesignRunStore store, AnalysisStore anal
                 lock (run)
                 {
                     run.Points.Add(TargetSearchMapper.Point(point, analysisId));
+                    run.AnalysisIds[value] = analysisId;
                     json = Serialize(Snapshot(run));
                 }
                 store.UpdateAsync(run.Id, run.Status, json, null, cancellation).GetAwaiter().GetResult();
                 return point;
             }, null, cancellation), cancellation);
+            lock (run)
+            {
+                // The final margins (a default requirement the section cannot check is left out of them).
+                run.Points.Clear();
+                run.Points.AddRange(run.Result.Points.Select(p => TargetSearchMapper.Point(p, run.AnalysisIds.GetValueOrDefault(p.Value))));
+            }
             run.Status = "done";
         }
         catch (OperationCanceledException) { run.Status = "cancelled"; }
@@ -99,7 +107,7 @@ public sealed class TargetSearchService(DesignRunStore store, AnalysisStore anal
             var r = run.Result;
             int total = Math.Max(run.Points.Count, r is null ? s.ScanPoints + TargetSearchMapper.BisectionSteps(s) : run.Points.Count);
             return new TargetSearchDto(run.Id, run.Title, run.Created, run.Status, run.Points.Count, total, s.Member, [s.From, s.To],
-                Require(s.Require), s.Tolerance, s.ScanPoints, s.From, r?.Value, r?.Feasible, r?.Governing,
+                Require(r?.Require ?? s.Require), s.Tolerance, s.ScanPoints, s.From, r?.Value, r?.Feasible, r?.Governing,
                 r?.Margins ?? new Dictionary<string, double?>(), r?.Intervals.Select(i => new TargetIntervalDto(i.From, i.To)).ToList() ?? [],
                 r?.Monotone, r?.BestMargin, r?.BestValue, r?.Message, r?.Notes ?? [], run.Points.OrderBy(p => p.Value).ToList(),
                 AnalysisResult.Caution, run.Clock.Elapsed.TotalSeconds);
