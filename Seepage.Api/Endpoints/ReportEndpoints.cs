@@ -82,7 +82,7 @@ public static class ReportEndpoints
         await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
             ? TypedResults.Content(StationCsv.Exit(r), Csv) : NotFound("analysis", id);
 
-    private static Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult> Render(ReportDocument report, string? format, string fileName)
+    internal static Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult> Render(ReportDocument report, string? format, string fileName)
     {
         if (!string.Equals(format, "pdf", StringComparison.OrdinalIgnoreCase)) return TypedResults.Content(HtmlReportWriter.Write(report), Html);
         if (!ReportFonts.Available)
@@ -91,7 +91,7 @@ public static class ReportEndpoints
         return TypedResults.File(PdfReportWriter.Write(report), Pdf, fileName);
     }
 
-    private static ProblemHttpResult? Format(string? format) =>
+    internal static ProblemHttpResult? Format(string? format) =>
         format is null || format.Equals("html", StringComparison.OrdinalIgnoreCase) || format.Equals("pdf", StringComparison.OrdinalIgnoreCase) ? null
             : TypedResults.Problem(statusCode: StatusCodes.Status400BadRequest, title: "Unknown report format.",
                 detail: $"'{format}' is not a report format; use html (default) or pdf.");
