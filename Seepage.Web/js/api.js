@@ -58,6 +58,14 @@ export const api = {
   }),
   /** The result document of a stored analysis. */
   analysis: id => call(`analyses/${encodeURIComponent(id)}`),
+  /** Starts a study in the background: 202 with the study (id, status, done/total). */
+  startStudy: (request, signal) => postJson('studies?background=true', JSON.stringify(request), signal),
+  /** A study's state and the rows finished so far. */
+  study: (id, signal) => call(`studies/${encodeURIComponent(id)}`, { signal }),
+  /** Asks the service to stop and remove a study (answers 404/405 where the service cannot). */
+  deleteStudy: id => call(`studies/${encodeURIComponent(id)}`, { method: 'DELETE' }),
+  /** The section document of a stored analysis, as posted. */
+  section: id => call(`analyses/${encodeURIComponent(id)}/section`),
   /** Field data for drawing (nodes, triangles, heads, equipotentials, flow lines, walls). */
   field: (id, signal) => call(`analyses/${encodeURIComponent(id)}/field`, { signal }),
 };

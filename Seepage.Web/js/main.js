@@ -17,6 +17,7 @@ import { renderFigures } from './figures.js';
 import { renderKeyFigures } from './key-figures.js';
 import { upliftPlot, exitPlot } from './plots.js';
 import { wireExports } from './export-buttons.js';
+import { StudyView } from './study-view.js';
 
 const FALLBACK_CAUTION = 'Results depend on the idealisation and the soil data. They need review by a licensed geotechnical engineer; local codes govern the required factors of safety.';
 
@@ -28,7 +29,8 @@ const scene = new Scene(picture, {
   flowNetEl: byId('flow-net'),
   toggles: { fill: byId('show-fill'), equipotentials: byId('show-equipotentials'), flowlines: byId('show-flowlines'), mesh: byId('show-mesh'), arrows: byId('show-arrows') },
 });
-const tabs = new Tabs(['form', 'json', 'figures', 'plots']);
+const study = new StudyView(byId('study-view'), { getSection: () => state.section, openAnalysis: (id, name) => openStored(id, name) });
+const tabs = new Tabs(['form', 'json', 'figures', 'plots', 'study'], name => { if (name === 'study') study.refresh(); });
 const editor = new SectionEditor({ onChange: text => onEdit(text, 'json') });
 const form = new FormEditor(byId('form-editor'), { onChange: doc => fromForm(doc) });
 const store = new WorkStore();
@@ -106,6 +108,7 @@ function onEdit(text, from) {
     try { doc = JSON.parse(text); } catch (e) { showChecks([syntaxItem(e, text)], 'bad', 'JSON syntax error'); return; }
     state.section = doc;
     if (from !== 'form') form.show(doc);
+    if (tabs.current === 'study' && !study.running) study.refresh();
     renderSoilLegend(byId('soil-legend'), doc);
     if (state.result) markStale();
     scene.showSection(doc);
@@ -182,6 +185,21 @@ async function run() {
     }
   } finally {
     if (state.abort === abort) state.abort = null;
+  }
+}
+
+/** Shows a stored analysis (a study's alternative) in the picture and the figures; the editor keeps its section. */
+async function openStored(id, name) {
+  hideAlert();
+  try {
+    const [result, field, section] = await Promise.all([api.analysis(id), api.field(id), api.section(id)]);
+    Object.assign(state, { result, field, analysedText: editor.text });
+    scene.showAnalysis(section, result, field);
+    renderResult();
+    showWorkNote(`Showing the alternative “${name}” (analysis ${id}); the downloads and the memo are of it. ` +
+      'The editor still holds the base section: “Analyse section” returns to it.');
+  } catch (e) {
+    showAlert(`The alternative could not be opened: ${e.message}`);
   }
 }
 

@@ -3,8 +3,9 @@
 import { byId } from './dom.js';
 
 export class Tabs {
-  constructor(names) {
+  constructor(names, onSelect = () => {}) {
     this.names = names;
+    this.onSelect = onSelect;
     for (const name of names) byId(`tab-${name}`).addEventListener('click', () => this.select(name));
     byId(`tab-${names[0]}`).parentElement.addEventListener('keydown', e => {
       const step = { ArrowRight: 1, ArrowLeft: -1 }[e.key];
@@ -24,5 +25,6 @@ export class Tabs {
       byId(`tab-${n}`).tabIndex = on ? 0 : -1;
       byId(`panel-${n}`).hidden = !on;
     }
+    this.onSelect(name);
   }
 }
