@@ -39,6 +39,12 @@ public sealed record SectionModel(
     /// Null means "automatically for small models".</summary>
     public bool? TruncationCheck { get; init; }
 
+    /// <summary>The section document as analysed: in metres and kN/m³, every default the analysis uses filled in.</summary>
+    public SectionDocument? Analysed { get; init; }
+
+    /// <summary>Each value the analysis used for a member with a default, and whether it was given or defaulted.</summary>
+    public IReadOnlyList<Assumption> Assumptions { get; init; } = [];
+
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }
