@@ -10,6 +10,9 @@ internal static class SectionAssumptions
 {
     /// <param name="doc">The section in metres and kN/m³ (after <see cref="SectionUnits.ToSi"/>).</param>
     /// <param name="posted">The section as posted (for the units it was given in).</param>
+    /// <param name="model">The validated model (the values used).</param>
+    /// <param name="conductivityUnit">The canonical conductivity unit of the section.</param>
+    /// <param name="warnings">Receives a warning for each default a reviewer might not expect.</param>
     public static (SectionDocument Analysed, List<Assumption> Assumptions) Build(SectionDocument doc, SectionDocument posted,
         SectionModel model, string conductivityUnit, List<string> warnings)
     {
