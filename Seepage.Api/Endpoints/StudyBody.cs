@@ -38,7 +38,11 @@ public static class StudyBody
         }
         JsonNode? root;
         try { root = JsonNode.Parse(body, documentOptions: new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true }); }
-        catch (JsonException ex) { errors[""] = ["Malformed JSON: " + ex.Message]; return new Outcome(null, [], errors, false); }
+        catch (JsonException ex)
+        {
+            errors[""] = [$"is not valid JSON at line {ex.LineNumber + 1}, character {ex.BytePositionInLine + 1}: {ex.Message.Split(" LineNumber:")[0].Trim()}"];
+            return new Outcome(null, [], errors, false);
+        }
         if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors, false); }
         JsonObject? section = obj["base"] is JsonObject b ? CheckBase(b.ToJsonString(), "/base", errors) : null;
         if (obj["base"] is not JsonObject) errors["/base"] = ["must be the base section document (a JSON object)."];
@@ -52,6 +56,9 @@ public static class StudyBody
                     errors[$"/alternatives/{i}/changes"] = ["must be an object of JSON pointer → value, e.g. { \"/heads/0/total\": 7.5 }."];
                     continue;
                 }
+                foreach (var change in changes)
+                    if (SectionContract.CheckPointer(change.Key) is { } why)
+                        errors[$"/alternatives/{i}/changes/{change.Key.Replace("~", "~0").Replace("/", "~1")}"] = [$"'{change.Key}' {why}"];
                 string name = (alt["name"] as JsonValue)?.TryGetValue(out string? n) == true && !string.IsNullOrWhiteSpace(n) ? n! : $"alternative {i + 1}";
                 list.Add(new StudyAlternative(name, changes.Select(c => KeyValuePair.Create(c.Key, c.Value?.DeepClone())).ToList()));
             }

@@ -13,6 +13,8 @@ public static class AnalysisReportBuilder
 
     public static ReportDocument Build(AnalysisResultDto r, FieldDto field, SectionDocument section, DateTimeOffset printed)
     {
+        // The section as analysed is in metres and kN/m³ with every default filled, as the memo's units say.
+        if (r.AnalysedSection is { } analysed && SectionParser.Parse(analysed.ToJsonString(), out _) is { } si) section = si;
         string unit = section.ConductivityUnit ?? "m/s";
         var blocks = new List<ReportBlock>
         {
@@ -40,6 +42,7 @@ public static class AnalysisReportBuilder
             blocks.Add(new ReportFigure("Upward exit gradient along the exit surface with the allowable gradient (critical gradient / required factor).", exitFigure));
         blocks.Add(new ReportTable(ChecksCaption, ChecksHeaders, [.. Checks(r), .. AnalysisReportExtras.CheckRows(r)]));
         blocks.AddRange(AnalysisReportExtras.Blocks(r));
+        blocks.AddRange(AssumptionBlocks.Blocks(r));
         if (r.Warnings.Count > 0) { blocks.Add(new ReportHeading("Warnings")); blocks.Add(new ReportList(r.Warnings)); }
         blocks.Add(new ReportHeading("3. Methods and sources"));
         blocks.Add(new ReportList(Methods(r, section)));
@@ -71,7 +74,7 @@ public static class AnalysisReportBuilder
         }
         foreach (var h in r.Heave)
             rows.Add(Row($"Heave at {h.Cutoff} (D = {N(h.Depth)} m, h_a = {N(h.AverageExcessHead)} m)", "Terzaghi's prism, width D/2",
-                N(h.Factor), N(h.RequiredFactor), Verdict(h.Pass)));
+                N(h.Factor), N(h.RequiredFactor), h.Skipped is null ? Verdict(h.Pass) : "not an exit: " + h.Skipped));
         if (r.Creep is { } c)
         {
             rows.Add(Row($"Lane weighted creep ratio (L_w = {N(c.Lane.WeightedLength)} m)", "Lane 1935", N(c.Lane.Ratio), N(c.Lane.Required), Verdict(c.Lane.Pass)));

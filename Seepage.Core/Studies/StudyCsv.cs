@@ -29,6 +29,8 @@ public static class StudyCsv
                     string pointer = CsvText.Format(grid.Rows[r][j]).Trim();
                     if (JsonPointer.Tokens(pointer) is not { Count: > 0 })
                         problems.Add(new ImportProblem(cell(j), $"'{pointer}' is not a JSON pointer into the section (RFC 6901), e.g. /cutoffs/1/tip/1."));
+                    else if (Sections.SectionContract.CheckPointer(pointer) is { } why)
+                        problems.Add(new ImportProblem(cell(j), $"'{pointer}' {why}"));
                     else pointers.Add((j, pointer));
                 }
                 if (pointers.Count == 0 && problems.Count == 0)
