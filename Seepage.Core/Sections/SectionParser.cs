@@ -22,7 +22,7 @@ public static class SectionParser
         try { parsed = JsonDocument.Parse(json, DocumentOptions); }
         catch (JsonException ex)
         {
-            problems = [new SectionProblem(ToPointer(ex.Path), Describe(ex))];
+            problems = [new SectionProblem(ToPointer(ex.Path ?? SyntaxPath(json)), Describe(ex))];
             return null;
         }
         using (parsed)
@@ -44,6 +44,13 @@ public static class SectionParser
                 return null;
             }
         }
+    }
+
+    // The document reader knows no path at a syntax error; the serializer, reading the same text, says where it stopped.
+    private static string? SyntaxPath(string json)
+    {
+        try { JsonSerializer.Deserialize<SectionDocument>(json, Options); return null; }
+        catch (JsonException ex) { return ex.Path; }
     }
 
     private static readonly JsonDocumentOptions DocumentOptions = new()
