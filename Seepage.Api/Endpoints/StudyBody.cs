@@ -37,10 +37,15 @@ public static class StudyBody
             return Finish(baseSection, alternatives, errors);
         }
         JsonNode? root;
-        try { root = JsonNode.Parse(body, documentOptions: new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true }); }
+        var options = new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true, AllowDuplicateProperties = false };
+        try { root = JsonNode.Parse(body, documentOptions: options); }
         catch (JsonException ex)
         {
-            errors[""] = [$"is not valid JSON at line {ex.LineNumber + 1}, character {ex.BytePositionInLine + 1}: {ex.Message.Split(" LineNumber:")[0].Trim()}"];
+            // A member given twice (which one would win?) or broken syntax, keyed by where the reader stopped.
+            string? twice = DuplicateMemberFinder.Find(body);
+            errors[twice ?? SectionParser.ToPointer(ex.Path)] = [twice is null
+                ? $"is not valid JSON at line {ex.LineNumber + 1}, character {ex.BytePositionInLine + 1}: {ex.Message.Split(" LineNumber:")[0].Trim()}"
+                : "is given twice in its object; give each member once (which one should count?)."];
             return new Outcome(null, [], errors, false);
         }
         if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors, false); }

@@ -41,7 +41,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
             case "true" or "yes" or "1": return true;
             case "false" or "no" or "0": return false;
         }
-        problems.Add(new ImportProblem(block.At(row, column), $"'{CsvText.Format(value)}' is not a yes/no value (the '{column}' column takes true or false)."));
+        problems.Add(new ImportProblem(block.At(row, column), $"'{SafeText.Of(CsvText.Format(value))}' is not a yes/no value (the '{column}' column takes true or false)."));
         return null;
     }
 
@@ -60,7 +60,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
         else if (!TryParse(CsvText.Format(value).Trim(), out number))
         {
             problems.Add(new ImportProblem(block.At(row, column),
-                $"'{CsvText.Format(value)}' is not a number (the '{column}' column takes numbers such as 2.5 or 3e-4)."));
+                $"'{SafeText.Of(CsvText.Format(value))}' is not a number (the '{column}' column takes numbers such as 2.5 or 3e-4)."));
             return null;
         }
         if (!double.IsFinite(number))
@@ -128,7 +128,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
             if (first is null) { first = value; firstRow = r; Mark(pointer, block, r, column); }
             else if (!Equals(first, value))
                 problems.Add(new ImportProblem(block.At(r, column),
-                    $"'{CsvText.Format(block.Value(r, column))}' differs from the '{column}' given in row {firstRow + 1} for the same item; leave it blank or repeat the same value."));
+                    $"'{SafeText.Of(CsvText.Format(block.Value(r, column)))}' differs from the '{column}' given in row {firstRow + 1} for the same item; leave it blank or repeat the same value."));
         }
         return first;
     }

@@ -168,7 +168,7 @@ public static class SectionSheetReader
                     cells.Mark("/heaveCheck", b, rows[0], "check");
                     break;
                 default:
-                    cells.Problems.Add(new ImportProblem(b.At(rows[0], "check"), $"'{kind}' is not a check; use 'exit' or 'heave'."));
+                    cells.Problems.Add(new ImportProblem(b.At(rows[0], "check"), $"'{SafeText.Of(kind)}' is not a check; use 'exit' or 'heave'."));
                     break;
             }
         }

@@ -74,7 +74,7 @@ internal static class SheetBlockScanner
             {
                 string bare = text.Split('(', '[')[0].Trim();
                 string near = Sections.NearMatch.Suggestion(bare, SectionSheetLayout.Columns[block]) is { } s ? $" {char.ToUpperInvariant(s[0])}{s[1..]}" : "";
-                problems.Add(new ImportProblem(cell, $"'{text}' is not a column of the '{block}' block.{near} Its columns are " +
+                problems.Add(new ImportProblem(cell, $"'{SafeText.Of(text)}' is not a column of the '{block}' block.{near} Its columns are " +
                     string.Join(", ", SectionSheetLayout.Columns[block]) + "."));
             }
             else if (!columns.TryAdd(column, j))

@@ -18,6 +18,9 @@ public static class ConfinedFlowCheck
 
     public static void Check(SectionModel section, HeadField field, ExitResult? exit, List<string> warnings)
     {
+        if (exit is not null && exit.MaxGradient <= 0)
+            warnings.Add("Exit gradient: the exit surface receives inflow (the upward gradient is nowhere positive on it), so it is not where water leaves and the piping check is not applicable. Check the heads (swapped?) and exitCheck.along.");
+        if (section.Unconfined) return; // the phreatic surface is found: negative pressure above it is the unsaturated zone
         var mesh = field.Mesh;
         double headDifference = section.Heads.Max(h => h.Total) - section.Heads.Min(h => h.Total);
         if (section.Drains.Count > 0) headDifference = Math.Max(headDifference, section.Heads.Max(h => h.Total) - section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
@@ -39,7 +42,5 @@ public static class ConfinedFlowCheck
         if (total > 0 && negative / total > MaterialShare)
             warnings.Add(FormattableString.Invariant(
                 $"Pore pressure is negative over {100 * negative / total:F1} % of the section's area (within x = {x0:G4} … {x1:G4} m, y = {y0:G4} … {y1:G4} m). A confined solution draws water up into soil that would drain there: the upper surface is probably a free (phreatic) surface. Check that every boundary under standing water is a head boundary, or analyse the section as unconfined flow (\"unconfined\": true)."));
-        if (exit is not null && exit.MaxGradient <= 0)
-            warnings.Add("Exit gradient: the exit surface receives inflow (the upward gradient is nowhere positive on it), so it is not where water leaves and the piping check is not applicable. Check the heads (swapped?) and exitCheck.along.");
     }
 }

@@ -38,6 +38,15 @@ public sealed record SectionDocument
     /// distance from the structures tells whether the truncation changes the flow by more than 1% (default false;
     /// done automatically for models of fewer than 20,000 triangles).</summary>
     public bool? TruncationCheck { get; init; }
+    /// <summary>When true the upper limit of the saturated flow (the phreatic surface) is unknown and found by the
+    /// analysis; soil above it carries no flow. Default false (confined flow, every soil saturated).</summary>
+    public bool? Unconfined { get; init; }
+    /// <summary>Boundary polylines where water may leave at atmospheric pressure (unconfined sections).</summary>
+    public List<SeepageFaceDocument>? SeepageFaces { get; init; }
+    /// <summary>Flow-net drawing options (optional).</summary>
+    public FlowNetDocument? FlowNet { get; init; }
+    /// <summary>Title block of the design memo: project, job number, prepared/checked by, revision (optional).</summary>
+    public TitleBlockDocument? TitleBlock { get; init; }
 
     /// <summary>Extension members (names starting with "x-"): kept with the posted section, ignored by the analysis.
     /// Any other unknown member is refused by <see cref="SectionParser"/>.</summary>

@@ -13,6 +13,7 @@ public static class SectionParser
         ReadCommentHandling = JsonCommentHandling.Skip,
         AllowTrailingCommas = true,
         MaxDepth = 32,
+        AllowDuplicateProperties = false,
     };
 
     /// <summary>Parses <paramref name="json"/>; returns the document, or null with the problems.</summary>
@@ -22,7 +23,8 @@ public static class SectionParser
         try { parsed = JsonDocument.Parse(json, DocumentOptions); }
         catch (JsonException ex)
         {
-            problems = [new SectionProblem(ToPointer(ex.Path ?? SyntaxPath(json)), Describe(ex))];
+            problems = [new SectionProblem(ex.Path is null ? JsonSyntaxLocator.PointerOfFailure(json) : ToPointer(ex.Path),
+                Describe(ex))];
             return null;
         }
         using (parsed)
@@ -44,13 +46,6 @@ public static class SectionParser
                 return null;
             }
         }
-    }
-
-    // The document reader knows no path at a syntax error; the serializer, reading the same text, says where it stopped.
-    private static string? SyntaxPath(string json)
-    {
-        try { JsonSerializer.Deserialize<SectionDocument>(json, Options); return null; }
-        catch (JsonException ex) { return ex.Path; }
     }
 
     private static readonly JsonDocumentOptions DocumentOptions = new()
@@ -82,7 +77,7 @@ public static class SectionParser
     }
 
     /// <summary>Turns a System.Text.Json path such as <c>$.soils[0].kx</c> into the pointer <c>/soils/0/kx</c>.</summary>
-    internal static string ToPointer(string? path)
+    public static string ToPointer(string? path)
     {
         if (string.IsNullOrEmpty(path) || path == "$") return "";
         var sb = new System.Text.StringBuilder();

@@ -60,6 +60,10 @@ public static class StudyRunner
         {
             return (Failed(index, alternative.Name, [new SectionProblem("", "The linear solve did not converge: " + ex.Message)], clock, json), null);
         }
+        catch (NonFiniteResultException ex)
+        {
+            return (Failed(index, alternative.Name, [new SectionProblem("", ex.Message)], clock, json), null);
+        }
     }
 
     /// <summary>The key figures of one analysis.</summary>
