@@ -60,8 +60,8 @@ public static class CheckSummary
         if (r.Section.TruncationCheck == false) return "truncationCheck is false.";
         if (r.Section.TruncationCheck is null && r.Mesh.TriangleCount >= TruncationCheck.AutomaticBelowTriangles)
             return FormattableString.Invariant(
-                $"the mesh has {r.Mesh.TriangleCount:N0} triangles; the check runs by itself below {TruncationCheck.AutomaticBelowTriangles:N0} (truncationCheck: true runs it).");
-        return "the section has no structure or cutoff to measure the lateral boundaries from, or no flow.";
+                $"the first-order estimate does not apply to this section (drains, or more than two head levels) and the mesh has {r.Mesh.TriangleCount:N0} triangles; the wider solve runs by itself below {TruncationCheck.AutomaticBelowTriangles:N0} (truncationCheck: true runs it).");
+        return "the section has no structure or cutoff to measure the lateral boundaries from, one reaches a lateral boundary, or there is no flow.";
     }
 
     private static string IndependentSkipped(SectionModel s)
