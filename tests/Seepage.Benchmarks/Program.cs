@@ -11,6 +11,7 @@ switch (mode)
     case "stages": StageBenchmark.Run(rest); return 0;
     case "service": ServiceBenchmark.Run(rest); return 0;
     case "coldstart": ColdStartBenchmark.Run(rest); return 0;
+    case "order2": Order2Benchmark.Run(rest); return 0;
     default:
         Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|order2> [options]");
         return 1;
