@@ -60,13 +60,22 @@ public static class Analysis
             stage("streamFunction");
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
-            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops);
+            var reference = ConductivityTensor.Of(exitSoil);
+            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, reference.Mean,
+                options.HeadDrops ?? section.FlowNetHeadDrops) with
+            {
+                ReferenceSoil = exitSoil.Id,
+                UniformIsotropic = exitSoil.Kx == exitSoil.Ky
+                    && section.Zones.All(z => section.Soils[z.Soil] is var s && s.Kx == exitSoil.Kx && s.Ky == exitSoil.Ky),
+            };
             stage("flowNet");
         }
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
-        return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
+        var result = new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
             clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
+        FiniteResultGuard.Check(result);
+        return result;
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>

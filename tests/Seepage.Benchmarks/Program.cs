@@ -1,4 +1,5 @@
-// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mesh|solve|stages|service|coldstart|order2> [options]`.
+// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mode> [options]`; the modes are listed
+// in the switch below and in the usage line.
 // Each mode prints one fixed-format line per size (see MeshBenchmark and SolveBenchmark).
 using Seepage.Benchmarks;
 
@@ -12,7 +13,8 @@ switch (mode)
     case "service": ServiceBenchmark.Run(rest); return 0;
     case "coldstart": ColdStartBenchmark.Run(rest); return 0;
     case "order2": Order2Benchmark.Run(rest); return 0;
+    case "uncertainty": UncertaintyBenchmark.Run(rest); return 0;
     default:
-        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|order2> [options]");
+        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|order2|uncertainty> [options]");
         return 1;
 }
