@@ -55,7 +55,9 @@ public static class Analysis
         if (options.FlowNet)
         {
             // The flow net is drawn from the vertex heads (the P1 part of a quadratic field).
-            var psi = StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
+            // Linear elements: ψ from the element velocities by a walk (no solve); quadratic ones solve for it.
+            var psi = StreamFunctionWalk.Solve(field, boundary, cancellation)
+                ?? StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
             stage("streamFunction");
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));

@@ -1,3 +1,4 @@
+using Seepage.Core.Fem;
 using Seepage.Core.Geometry;
 using Seepage.Core.Meshing;
 
@@ -23,7 +24,7 @@ public static class ContourTracer
                 double vi = values[i] - level, vj = values[j] - level;
                 if ((vi < 0) == (vj < 0)) continue;
                 double s = vi / (vi - vj);
-                keys[found] = ((long)Math.Min(i, j) << 32) | (uint)Math.Max(i, j);
+                keys[found] = EdgeKey.Of(i, j);
                 pts[found] = new Point2(mesh.X[i] + s * (mesh.X[j] - mesh.X[i]), mesh.Y[i] + s * (mesh.Y[j] - mesh.Y[i]));
                 found++;
             }
@@ -34,7 +35,7 @@ public static class ContourTracer
 
     private static List<List<Point2>> Join(List<(long A, long B, Point2 Pa, Point2 Pb)> pieces)
     {
-        var byKey = new Dictionary<long, List<int>>();
+        var byKey = new Dictionary<long, List<int>>(EdgeKey.Comparer);
         for (int p = 0; p < pieces.Count; p++)
         {
             Add(pieces[p].A, p); Add(pieces[p].B, p);

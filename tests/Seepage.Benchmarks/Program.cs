@@ -12,8 +12,9 @@ switch (mode)
     case "stages": StageBenchmark.Run(rest); return 0;
     case "service": ServiceBenchmark.Run(rest); return 0;
     case "coldstart": ColdStartBenchmark.Run(rest); return 0;
+    case "order2": Order2Benchmark.Run(rest); return 0;
     case "uncertainty": UncertaintyBenchmark.Run(rest); return 0;
     default:
-        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|uncertainty> [options]");
+        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|order2|uncertainty> [options]");
         return 1;
 }
