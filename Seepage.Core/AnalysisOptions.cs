@@ -13,4 +13,8 @@ public sealed record AnalysisOptions
 
     /// <summary>Number of equal head drops of the flow net. Default 12.</summary>
     public int HeadDrops { get; init; } = Results.FlowNetBuilder.DefaultHeadDrops;
+
+    /// <summary>A check of each validated section before a study analyses it (the server's work budget); a problem it
+    /// returns refuses that alternative. Default none.</summary>
+    public Func<Sections.SectionModel, Sections.SectionProblem?>? Admission { get; init; }
 }

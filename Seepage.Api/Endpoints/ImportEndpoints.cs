@@ -1,3 +1,4 @@
+using Microsoft.Extensions.Options;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Core.Imports;
 using Seepage.Core.Sections;
@@ -35,9 +36,9 @@ public static class ImportEndpoints
     }
 
     public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> Import(HttpRequest request,
-        CancellationToken cancellation)
+        IOptions<ServiceLimits> limits, CancellationToken cancellation)
     {
-        var body = await SpreadsheetBody.ReadAsync(request, cancellation);
+        var body = await SpreadsheetBody.ReadAsync(request, limits.Value.Spreadsheets, cancellation);
         if (body.Import is not { } import)
             return TypedResults.Problem(statusCode: body.Status, title: "The spreadsheet could not be taken.", detail: body.Error,
                 extensions: new Dictionary<string, object?> { ["errors"] = new Dictionary<string, string[]> { ["body"] = [body.Error ?? ""] } });
