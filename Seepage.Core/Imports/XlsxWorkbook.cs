@@ -56,7 +56,7 @@ public static class XlsxWorkbook
             var rows = sheet.Rows.Select(r =>
             {
                 IDictionary<string, object?> row = new Dictionary<string, object?>();
-                for (int j = 0; j < width; j++) row[CellRef.Letters(j + 1)] = j < r.Count ? r[j] : null;
+                for (int j = 0; j < width; j++) row[CellRef.Letters(j + 1)] = j < r.Count ? FormulaGuard.Escape(r[j]) : null;
                 return row;
             }).ToList();
             book[sheet.Name] = rows;
@@ -69,7 +69,7 @@ public static class XlsxWorkbook
     private static object? Normalise(object? value) => value switch
     {
         null => null,
-        string s => s,
+        string s => FormulaGuard.Unescape(s),
         double d => d,
         float f => (double)f,
         int or long or decimal or short => Convert.ToDouble(value, System.Globalization.CultureInfo.InvariantCulture),
