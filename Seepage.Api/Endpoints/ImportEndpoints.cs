@@ -18,7 +18,7 @@ public static class ImportEndpoints
                 "(section, soils, zone vertices, structures, cutoffs, heads, drains, checks, mesh; see the templates) and validates it. " +
                 "Answers 200 with the section document, ready to post to /api/v1/analyses, or 400 problem details whose errors are " +
                 "keyed by the cell concerned, e.g. \"sheet 'soils' row 4 column B\".")
-            .Accepts<string>(SpreadsheetBody.Csv, SpreadsheetBody.Xlsx, "multipart/form-data")
+            .Accepts<string>(SpreadsheetBody.Csv, SpreadsheetBody.Xlsx, "multipart/form-data", "application/csv", "text/plain")
             .Produces<SectionDocument>(StatusCodes.Status200OK, "application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
