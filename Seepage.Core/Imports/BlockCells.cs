@@ -10,6 +10,12 @@ internal sealed class BlockCells(List<ImportProblem> problems)
 
     public List<ImportProblem> Problems => problems;
 
+    /// <summary>Factors from the units in column headers to the section's units (see <see cref="HeaderUnits"/>).</summary>
+    public Dictionary<(SheetBlock, string), double> Factors { get; set; } = [];
+
+    /// <summary>Every block of the workbook (the header units of all of them are checked against the section's units).</summary>
+    public IReadOnlyList<SheetBlock> Blocks { get; set; } = [];
+
     /// <summary>Notes that <paramref name="pointer"/> came from the cell of <paramref name="column"/> in <paramref name="row"/>.</summary>
     public void Mark(string pointer, SheetBlock block, int row, string column) => Map.TryAdd(pointer, block.At(row, column));
 
@@ -62,7 +68,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
             problems.Add(new ImportProblem(block.At(row, column), $"The '{column}' cell must hold a finite number."));
             return null;
         }
-        return number;
+        return Factors.TryGetValue((block, column), out double factor) ? number * factor : number;
     }
 
     /// <summary>Reads invariant numbers ("2.5", "3e-4") and, failing that, a single decimal comma ("2,5").</summary>

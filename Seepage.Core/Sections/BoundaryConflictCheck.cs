@@ -23,6 +23,9 @@ public static class BoundaryConflictCheck
         for (int i = 0; i < (doc.Drains?.Count ?? 0); i++)
             if (doc.Drains![i] is { } d && Points(d.Along) is { } line)
                 yield return new BoundaryLine($"/drains/{i}/along", "a drain (head = elevation)", line);
+        for (int i = 0; i < (doc.SeepageFaces?.Count ?? 0); i++)
+            if (doc.SeepageFaces![i] is { } f && Points(f.Along) is { } line)
+                yield return new BoundaryLine($"/seepageFaces/{i}/along", "a seepage face", line);
     }
 
     /// <summary>Adds a problem for every later polyline that shares a stretch longer than <paramref name="tolerance"/> (m)
