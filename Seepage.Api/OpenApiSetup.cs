@@ -30,9 +30,13 @@ public static class OpenApiSetup
         return services;
     }
 
+    /// <summary>Configuration key: whether the Swagger UI is served at /swagger (default true, for the quick start; set
+    /// <c>OpenApi__SwaggerUi=false</c> in production). The OpenAPI document itself is always served.</summary>
+    public const string SwaggerUiKey = "OpenApi:SwaggerUi";
+
     public static void UseSeepageOpenApi(this WebApplication app)
     {
         app.UseSwagger();
-        app.UseSwaggerUI(o => o.DocumentTitle = "Seepage API");
+        if (app.Configuration.GetValue(SwaggerUiKey, true)) app.UseSwaggerUI(o => o.DocumentTitle = "Seepage API");
     }
 }

@@ -1,12 +1,16 @@
 using Seepage.Api;
+using Seepage.Api.Admission;
 using Seepage.Api.Endpoints;
 
 var builder = WebApplication.CreateBuilder(new WebApplicationOptions { Args = args, WebRootPath = ServiceSetup.PageFolder() });
 builder.Services.AddSeepageServices(builder.Configuration, builder.Environment);
 builder.Services.AddSeepageOpenApi();
+builder.Services.AddSeepageAdmission(builder.Configuration);
 
 var app = builder.Build();
+app.UseSeepageSecurityHeaders();
 app.UseSeepageErrorHandling();
+app.UseSeepageAdmission();
 app.UseDefaultFiles();
 app.UseStaticFiles();
 app.UseSeepageOpenApi();

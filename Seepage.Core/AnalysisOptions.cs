@@ -18,4 +18,8 @@ public sealed record AnalysisOptions
     /// <summary>Called on the analysing thread after each stage with its name (mesh, assembly, solve, figures,
     /// convergence, truncation, streamFunction, flowNet), e.g. for a benchmark to read a clock. Default none.</summary>
     public Action<string>? StageDone { get; init; }
+
+    /// <summary>A check of each validated section before a study analyses it (the server's work budget); a problem it
+    /// returns refuses that alternative. Default none.</summary>
+    public Func<Sections.SectionModel, Sections.SectionProblem?>? Admission { get; init; }
 }

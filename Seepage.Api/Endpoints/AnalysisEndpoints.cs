@@ -1,3 +1,5 @@
+using Microsoft.Extensions.Options;
+using Seepage.Api.Admission;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
@@ -23,7 +25,8 @@ public static class AnalysisEndpoints
                 "The result is stored; its field data for drawing is at /api/v1/analyses/{id}/field.")
             .Accepts<SectionDocument>("application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
-            .ProducesProblem(StatusCodes.Status422UnprocessableEntity);
+            .ProducesProblem(StatusCodes.Status422UnprocessableEntity)
+            .ProducesProblem(StatusCodes.Status429TooManyRequests);
         group.MapGet("/{id}", Get)
             .WithName("GetAnalysis")
             .WithSummary("Read a stored analysis")
@@ -45,11 +48,15 @@ public static class AnalysisEndpoints
     }
 
     public static async Task<Results<Created<AnalysisResultDto>, ValidationProblem, ProblemHttpResult>> Create(
-        HttpRequest request, AnalysisService service, CancellationToken cancellation)
+        HttpRequest request, AnalysisService service, AnalysisGate gate, IOptions<ServiceLimits> limits, CancellationToken cancellation)
     {
         var body = await SectionBody.ReadAsync(request, cancellation);
         if (body.TooLarge) return SectionProblems.TooLarge();
         if (body.Model is null || body.Problems.Count > 0) return SectionProblems.Invalid(body);
+        using var ticket = await gate.EnterAsync(body.Model, cancellation);
+        if (ticket is null)
+            return AdmissionSetup.TooBusy(request.HttpContext, limits.Value.RetryAfterSeconds,
+                $"{gate.Admitted} large analyses are running or waiting, the most this server takes; retry after {limits.Value.RetryAfterSeconds} s.");
         try
         {
             var dto = await service.RunAsync(body.Model, body.Json!, cancellation);

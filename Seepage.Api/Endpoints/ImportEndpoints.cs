@@ -1,3 +1,4 @@
+using Microsoft.Extensions.Options;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Core.Imports;
 using Seepage.Core.Sections;
@@ -17,7 +18,7 @@ public static class ImportEndpoints
                 "(section, soils, zone vertices, structures, cutoffs, heads, drains, checks, mesh; see the templates) and validates it. " +
                 "Answers 200 with the section document, ready to post to /api/v1/analyses, or 400 problem details whose errors are " +
                 "keyed by the cell concerned, e.g. \"sheet 'soils' row 4 column B\".")
-            .Accepts<string>(SpreadsheetBody.Csv, SpreadsheetBody.Xlsx, "multipart/form-data")
+            .Accepts<string>(SpreadsheetBody.Csv, SpreadsheetBody.Xlsx, "multipart/form-data", "application/csv", "text/plain")
             .Produces<SectionDocument>(StatusCodes.Status200OK, "application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
@@ -35,9 +36,9 @@ public static class ImportEndpoints
     }
 
     public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> Import(HttpRequest request,
-        CancellationToken cancellation)
+        IOptions<ServiceLimits> limits, CancellationToken cancellation)
     {
-        var body = await SpreadsheetBody.ReadAsync(request, cancellation);
+        var body = await SpreadsheetBody.ReadAsync(request, limits.Value.Spreadsheets, cancellation);
         if (body.Import is not { } import)
             return TypedResults.Problem(statusCode: body.Status, title: "The spreadsheet could not be taken.", detail: body.Error,
                 extensions: new Dictionary<string, object?> { ["errors"] = new Dictionary<string, string[]> { ["body"] = [body.Error ?? ""] } });

@@ -110,7 +110,8 @@ public static class ReportEndpoints
     internal static ProblemHttpResult? Format(string? format) =>
         format is null || format.Equals("html", StringComparison.OrdinalIgnoreCase) || format.Equals("pdf", StringComparison.OrdinalIgnoreCase) ? null
             : TypedResults.Problem(statusCode: StatusCodes.Status400BadRequest, title: "Unknown report format.",
-                detail: $"'{format}' is not a report format; use html (default) or pdf.");
+                detail: $"'{Core.SafeText.Of(format)}' is not a report format; use html (default) or pdf.",
+                extensions: new Dictionary<string, object?> { ["errors"] = new Dictionary<string, string[]> { ["format"] = ["must be html or pdf."] } });
 
     private static ProblemHttpResult NotFound(string kind, string id) =>
         TypedResults.Problem(statusCode: StatusCodes.Status404NotFound, title: $"No such {kind}.", detail: $"No {kind} has the id '{id}'.");

@@ -1,3 +1,4 @@
+using Microsoft.Extensions.Options;
 using System.Text;
 using Seepage.Core.Sections;
 
@@ -28,6 +29,9 @@ public static class SectionBody
         var document = SectionParser.Parse(json, out var parseProblems);
         if (document is null) return new Outcome(null, json, parseProblems, false);
         var outcome = SectionValidator.Validate(document);
+        // Work over the server's budget is refused like any other problem, before anything starts.
+        var limits = request.HttpContext.RequestServices.GetService<IOptions<ServiceLimits>>()?.Value;
+        if (outcome.Model is { } model && limits?.OverBudget(model) is { } overBudget) return new Outcome(null, json, [overBudget], false);
         return new Outcome(outcome.Model, json, outcome.Problems, false);
     }
 

@@ -12,7 +12,7 @@ public static class SpreadsheetBody
     /// <summary>The import (null when the body could not be taken), or why not: status and message.</summary>
     public sealed record Outcome(SheetImport? Import, int Status, string? Error);
 
-    public static async Task<Outcome> ReadAsync(HttpRequest request, CancellationToken cancellation)
+    public static async Task<Outcome> ReadAsync(HttpRequest request, SpreadsheetLimits limits, CancellationToken cancellation)
     {
         if (request.ContentLength > SectionBody.MaxBytes) return TooLarge();
         string type = (request.ContentType ?? "").Split(';')[0].Trim().ToLowerInvariant();
@@ -42,11 +42,12 @@ public static class SpreadsheetBody
         var bytes = await ReadBoundedAsync(source, cancellation);
         if (bytes is null) return TooLarge();
         if (bytes.Length == 0) return Bad(StatusCodes.Status400BadRequest, "The body is empty; send a spreadsheet.");
-        if (csv) return new Outcome(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes)), 200, null);
+        if (csv) return new Outcome(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes), limits), 200, null);
         try
         {
-            using var workbook = new MemoryStream(bytes);
-            return new Outcome(SectionSpreadsheet.ReadXlsx(workbook), 200, null);
+            // Unpacking and parsing are CPU work: off the request thread, and stopped when the client leaves.
+            var import = await Task.Run(() => SectionSpreadsheet.ReadXlsx(new MemoryStream(bytes), limits, cancellation), cancellation);
+            return new Outcome(import, 200, null);
         }
         catch (InvalidDataException ex)
         {

@@ -17,7 +17,9 @@ public sealed class AnalysisService(AnalysisStore store, ILogger<AnalysisService
     public async Task<AnalysisResultDto> RunAsync(SectionModel section, string sectionJson, CancellationToken cancellation)
     {
         var options = new AnalysisOptions { Solver = new SolverOptions { TimeBudget = SolveBudget } };
-        var result = await Task.Run(() => Analysis.Run(section, options, cancellation), cancellation);
+        // The analysis is CPU work of up to minutes: on a thread of its own, not one the server needs to read requests.
+        var result = await Task.Factory.StartNew(() => Analysis.Run(section, options, cancellation), cancellation,
+            TaskCreationOptions.LongRunning, TaskScheduler.Default);
         string id = "a" + Guid.NewGuid().ToString("N")[..15];
         var created = DateTimeOffset.UtcNow;
         var dto = ResultMapper.ToDto(id, created, result);
@@ -25,8 +27,8 @@ public sealed class AnalysisService(AnalysisStore store, ILogger<AnalysisService
         await store.SaveAsync(new StoredAnalysis(id, created, dto.Title, sectionJson,
             JsonSerializer.Serialize(dto, Json), JsonSerializer.Serialize(field, Json)), cancellation);
         logger.LogInformation("Analysis {Id} '{Title}': {Nodes} nodes, {Iterations} iterations, {Seconds:F3} s, q = {Flow:E4} m³/s per m",
-            id, dto.Title, dto.Mesh.Nodes, dto.Solver.Iterations, dto.Seconds, dto.Flow.PerMetre);
-        foreach (var w in dto.Warnings) logger.LogInformation("Analysis {Id} warning: {Warning}", id, w);
+            id, SafeText.Of(dto.Title, 120), dto.Mesh.Nodes, dto.Solver.Iterations, dto.Seconds, dto.Flow.PerMetre);
+        foreach (var w in dto.Warnings) logger.LogInformation("Analysis {Id} warning: {Warning}", id, SafeText.Of(w, 400));
         return dto;
     }
 

@@ -1,4 +1,6 @@
 using System.Diagnostics;
+using System.Threading.Channels;
+using Microsoft.Extensions.Options;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using Seepage.Api.Contracts;
@@ -11,7 +13,8 @@ namespace Seepage.Api.Storage;
 
 /// <summary>Runs studies (Core <see cref="StudyRunner"/>), stores each analysed alternative as an analysis and the study
 /// document as rows finish, so GET /api/v1/studies/{id} reports progress and survives a restart.</summary>
-public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHostApplicationLifetime lifetime, ILogger<StudyService> logger)
+public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHostApplicationLifetime lifetime, ILogger<StudyService> logger,
+    IOptions<ServiceLimits> limits)
 {
     /// <summary>Studies with at most this many alternatives run while the request waits (unless asked to run in the background).</summary>
     public const int WaitLimit = 8;
@@ -67,13 +70,27 @@ public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHo
         return study.Status == "running" && DateTimeOffset.UtcNow - stored.Updated > SilenceLimit ? study with { Status = "interrupted" } : study;
     }
 
+    // The alternatives run on a thread of their own (StudyRunner fans them out over the cores); each finished row is handed
+    // over a channel to this method's async loop, which stores it, so no thread ever blocks on the database.
     private async Task ExecuteAsync(Run run, JsonObject baseSection, CancellationToken cancellation)
     {
-        var options = new AnalysisOptions { Solver = new SolverOptions { TimeBudget = AnalysisService.SolveBudget } };
+        var options = new AnalysisOptions
+        {
+            Solver = new SolverOptions { TimeBudget = AnalysisService.SolveBudget }, Admission = limits.Value.OverBudget,
+        };
+        var finished = Channel.CreateUnbounded<(StudyRow Row, AnalysisResult? Result)>(new UnboundedChannelOptions { SingleReader = true });
+        // Stopping the study (its request gone, the server stopping, or a row that could not be stored) stops the alternatives
+        // not yet started and the solves of those running.
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellation);
+        var runner = Task.Factory.StartNew(() => StudyRunner.Run(baseSection, run.Alternatives, options,
+                (row, result) => finished.Writer.TryWrite((row, result)), stop.Token), stop.Token,
+            TaskCreationOptions.LongRunning, TaskScheduler.Default);
+        _ = runner.ContinueWith(t => finished.Writer.TryComplete(), TaskScheduler.Default);
         try
         {
-            await Task.Run(() => StudyRunner.Run(baseSection, run.Alternatives, options, (row, result) => Finish(run, row, result, cancellation),
-                cancellation), cancellation);
+            await foreach (var (row, result) in finished.Reader.ReadAllAsync(CancellationToken.None))
+                await FinishAsync(run, row, result, cancellation);
+            await runner;
             run.Status = "done";
         }
         catch (OperationCanceledException)
@@ -85,13 +102,15 @@ public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHo
             run.Status = "failed";
             logger.LogError(ex, "Study {Id} failed", run.Id);
         }
-        logger.LogInformation("Study {Id} '{Title}': {Status}, {Done}/{Total} alternatives in {Seconds:F2} s", run.Id, run.Title,
-            run.Status, run.Done, run.Alternatives.Count, run.Clock.Elapsed.TotalSeconds);
+        await stop.CancelAsync();
+        await runner.ContinueWith(_ => { }, TaskScheduler.Default); // the alternatives still running have stopped
+        logger.LogInformation("Study {Id} '{Title}': {Status}, {Done}/{Total} alternatives in {Seconds:F2} s", run.Id,
+            SafeText.Of(run.Title, 120), run.Status, run.Done, run.Alternatives.Count, run.Clock.Elapsed.TotalSeconds);
         await studies.UpdateAsync(run.Id, run.Status, Serialize(Snapshot(run)), CancellationToken.None);
     }
 
-    // Called on a worker thread as each alternative finishes: store its analysis, then the study's progress.
-    private void Finish(Run run, StudyRow row, AnalysisResult? result, CancellationToken cancellation)
+    // Store one finished alternative's analysis, then the study's progress.
+    private async Task FinishAsync(Run run, StudyRow row, AnalysisResult? result, CancellationToken cancellation)
     {
         string? analysisId = null;
         if (result is not null)
@@ -100,9 +119,8 @@ public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHo
             var created = DateTimeOffset.UtcNow;
             var dto = ResultMapper.ToDto(analysisId, created, result);
             var field = ResultMapper.ToFieldDto(analysisId, result);
-            analyses.SaveAsync(new StoredAnalysis(analysisId, created, dto.Title, row.SectionJson ?? "{}",
-                JsonSerializer.Serialize(dto, AnalysisService.Json), JsonSerializer.Serialize(field, AnalysisService.Json)), cancellation)
-                .GetAwaiter().GetResult();
+            await analyses.SaveAsync(new StoredAnalysis(analysisId, created, dto.Title, row.SectionJson ?? "{}",
+                JsonSerializer.Serialize(dto, AnalysisService.Json), JsonSerializer.Serialize(field, AnalysisService.Json)), cancellation);
         }
         var alternative = run.Alternatives[row.Index];
         var rowDto = new StudyRowDto(row.Index, row.Name, alternative.Changes.ToDictionary(c => c.Key, c => c.Value?.DeepClone()),
@@ -116,7 +134,7 @@ public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHo
             run.Done++;
             json = Serialize(Snapshot(run));
         }
-        studies.UpdateAsync(run.Id, run.Status, json, cancellation).GetAwaiter().GetResult();
+        await studies.UpdateAsync(run.Id, run.Status, json, cancellation);
     }
 
     private static StudyDto Snapshot(Run run)

@@ -40,7 +40,8 @@ public static class CsvText
         return new SheetGrid(sheet, rows);
     }
 
-    /// <summary>Writes the grid as comma-separated text with CRLF line ends; doubles in invariant round-trip form.</summary>
+    /// <summary>Writes the grid as comma-separated text with CRLF line ends; doubles in invariant round-trip form, text that
+    /// would start a formula escaped (<see cref="FormulaGuard"/>).</summary>
     public static string Write(IEnumerable<IReadOnlyList<object?>> rows)
     {
         var sb = new StringBuilder();
@@ -51,7 +52,7 @@ public static class CsvText
             for (int j = 0; j <= last; j++)
             {
                 if (j > 0) sb.Append(',');
-                sb.Append(Quote(Format(row[j])));
+                sb.Append(Quote(Format(FormulaGuard.Escape(row[j]))));
             }
             sb.Append("\r\n");
         }
@@ -72,7 +73,7 @@ public static class CsvText
 
     private static object? Cell(StringBuilder field, bool quoted)
     {
-        string s = field.ToString();
+        string s = FormulaGuard.Unescape(field.ToString());
         field.Clear();
         return s.Length == 0 && !quoted ? null : s;
     }

@@ -47,6 +47,7 @@ public static class StudyRunner
         if (document is null) return (Failed(index, alternative.Name, parseProblems, clock, json), null);
         var outcome = SectionValidator.Validate(document);
         if (!outcome.IsValid) return (Failed(index, alternative.Name, outcome.Problems, clock, json), null);
+        if (options?.Admission?.Invoke(outcome.Model!) is { } refused) return (Failed(index, alternative.Name, [refused], clock, json), null);
         try
         {
             var result = Analysis.Run(outcome.Model!, options, cancellation);
