@@ -34,7 +34,8 @@ public static class ResultMapper
             r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length, g.Method, g.LineIntegral)).ToList(),
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
-            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null);
+            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change,
+                tr.Method) : null);
     }
 
     public static FieldDto ToFieldDto(string id, AnalysisResult r)
