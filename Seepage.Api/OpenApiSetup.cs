@@ -25,6 +25,7 @@ public static class OpenApiSetup
                 if (File.Exists(path)) o.IncludeXmlComments(path);
             }
             o.OperationFilter<SectionExampleFilter>();
+            o.SchemaFilter<SectionEnumerationFilter>();
         });
         return services;
     }

@@ -34,6 +34,7 @@ public static class Analysis
         var sampler = new FieldSampler(field);
         var uplift = UpliftCalculator.Compute(section, field, boundary, tolerance);
         var exit = ExitGradientCalculator.Compute(section, sampler, boundary, tolerance, warnings);
+        ConfinedFlowCheck.Check(section, field, exit, warnings);
         var heave = HeaveCalculator.Compute(section, sampler, warnings);
         var exitSoil = ExitSoil(section, sampler, exit);
         var creep = CreepCalculator.Compute(section, exitSoil);

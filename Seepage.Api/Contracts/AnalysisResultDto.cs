@@ -18,7 +18,21 @@ public sealed record AnalysisResultDto(
     IndependentVariablesDto? IndependentVariables = null,
     IReadOnlyList<GaugeDto>? Gauges = null,
     ConvergenceDto? Convergence = null,
-    TruncationDto? Truncation = null);
+    TruncationDto? Truncation = null,
+    IReadOnlyList<CheckDto>? Checks = null,
+    bool? Pass = null,
+    IReadOnlyList<string>? PassCovers = null,
+    System.Text.Json.Nodes.JsonNode? AnalysedSection = null,
+    IReadOnlyList<AssumptionDto>? Assumptions = null);
+
+/// <summary>One check and its verdict (<c>pass</c> true/false, null without one), or <c>skipped</c>: why it did not run or
+/// gave no verdict. The result's <c>pass</c> is false when any verdict fails, true when all pass, and covers the checks
+/// listed in <c>passCovers</c> (those of exit, heave, lane, bligh that gave a verdict).</summary>
+public sealed record CheckDto(string Check, bool? Pass, string? Skipped);
+
+/// <summary>A value the analysis used: the member (JSON pointer), the value in <c>unit</c>, <c>origin</c> "given" or
+/// "default", and a note.</summary>
+public sealed record AssumptionDto(string Member, System.Text.Json.Nodes.JsonNode? Value, string Unit, string Origin, string Note);
 
 /// <summary>Seepage discharge per metre of structure. <c>perMetre</c>, <c>inflow</c>, <c>outflow</c> in m³/s per m;
 /// <c>balance</c> = (inflow − outflow) / inflow, dimensionless;
@@ -53,13 +67,15 @@ public sealed record ExitProfilePointDto(double X, double Gradient, double RowGr
 /// <summary>Heave check at a cutoff (Terzaghi's prism, width D/2): depth D in m, average excess head in m;
 /// <c>prism</c> = [fromX, toX, surfaceY] in m;
 /// <c>effectiveWeight</c> W′ = γ′·D·D/2 and <c>upliftForce</c> γw·h_a·D/2 in kN/m.</summary>
+/// <remarks><c>skipped</c>: why the factor is not a heave verdict (a prism under a structure is not at an exit).</remarks>
 public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor, bool? Pass,
-    double? EffectiveWeight = null, double UpliftForce = 0, double[]? Prism = null);
+    double? EffectiveWeight = null, double UpliftForce = 0, double[]? Prism = null, string? Skipped = null);
 
 /// <summary>Hand creep checks beside the FE results (lengths in m, ratios dimensionless).</summary>
 public sealed record CreepDto(CreepCheckDto Lane, CreepCheckDto Bligh);
 
-public sealed record CreepCheckDto(double WeightedLength, double Ratio, double? Required, bool? Pass, string Source);
+/// <summary>A creep check: length in m, ratio, required ratio from the cited table; <c>skipped</c> says why there is none.</summary>
+public sealed record CreepCheckDto(double WeightedLength, double Ratio, double? Required, bool? Pass, string Source, string? Skipped = null);
 
 /// <summary>Mesh statistics: counts, angles in degrees, mesh time in seconds.</summary>
 public sealed record MeshStatsDto(int Nodes, int Triangles, double MinAngle, double MaxAngle, int[] MinAngleHistogram, double Seconds);

@@ -1,4 +1,7 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
 using Seepage.Core;
+using Seepage.Core.Sections;
 using Seepage.Core.Geometry;
 using Seepage.Core.Results;
 
@@ -9,6 +12,8 @@ public static class ResultMapper
 {
     public static AnalysisResultDto ToDto(string id, DateTimeOffset createdAt, AnalysisResult r)
     {
+        var checks = CheckSummary.Of(r);
+        var (pass, covers) = CheckSummary.Overall(checks);
         var f = r.Flow;
         var flow = new FlowDto(f.PerMetre, "m³/s per m", f.Inflow, f.Outflow, f.Balance, f.PerMetre * 86_400, f.PerMetre * 60_000,
             f.Boundaries.Select(b => new BoundaryFlowDto(b.Name, b.Kind, b.Flow)).ToList(),
@@ -23,7 +28,7 @@ public static class ResultMapper
                 e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY])
             : null;
         var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass,
-            h.EffectiveWeight, h.UpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
+            h.EffectiveWeight, h.UpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY], h.Skipped)).ToList();
         CreepDto? creep = r.Creep is { } c ? new CreepDto(Creep(c.Lane), Creep(c.Bligh)) : null;
         var q = r.Mesh.Quality;
         var mesh = new MeshStatsDto(q.Nodes, q.Triangles, q.MinAngle, q.MaxAngle, q.MinAngleHistogram, q.Seconds);
@@ -35,7 +40,11 @@ public static class ResultMapper
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
             r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change,
-                tr.Method) : null);
+                tr.Method) : null)
+            with { Checks = checks.Select(c => new CheckDto(c.Check, c.Pass, c.Skipped)).ToList(), Pass = pass, PassCovers = covers,
+                AnalysedSection = r.Section.Analysed is { } a ? JsonNode.Parse(SectionParser.Write(a)) : null,
+                Assumptions = r.Section.Assumptions.Select(x => new AssumptionDto(x.Member, JsonSerializer.SerializeToNode(x.Value), x.Unit,
+                    x.Origin, x.Note)).ToList() };
     }
 
     public static FieldDto ToFieldDto(string id, AnalysisResult r)
@@ -83,7 +92,7 @@ public static class ResultMapper
         return digits > 15 ? v : Math.Round(v, Math.Max(digits, 0));
     }
 
-    private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source);
+    private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source, c.Skipped);
 
     private static double[][] Line(IReadOnlyList<Point2> points) =>
         points.Select(p => new[] { Math.Round(p.X, 5), Math.Round(p.Y, 5) }).ToArray();

@@ -99,7 +99,7 @@ public static class ReportEndpoints
         TypedResults.Problem(statusCode: StatusCodes.Status400BadRequest, title: "Unknown units.",
             detail: $"'{units}' is not a unit system; use si (default) or us (ft, ft/day, psf, kip/ft, ft³/day per ft).");
 
-    private static Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult> Render(ReportDocument report, string? format, string fileName)
+    internal static Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult> Render(ReportDocument report, string? format, string fileName)
     {
         if (!string.Equals(format, "pdf", StringComparison.OrdinalIgnoreCase)) return TypedResults.Content(HtmlReportWriter.Write(report), Html);
         if (!ReportFonts.Available)
@@ -108,7 +108,7 @@ public static class ReportEndpoints
         return TypedResults.File(PdfReportWriter.Write(report), Pdf, fileName);
     }
 
-    private static ProblemHttpResult? Format(string? format) =>
+    internal static ProblemHttpResult? Format(string? format) =>
         format is null || format.Equals("html", StringComparison.OrdinalIgnoreCase) || format.Equals("pdf", StringComparison.OrdinalIgnoreCase) ? null
             : TypedResults.Problem(statusCode: StatusCodes.Status400BadRequest, title: "Unknown report format.",
                 detail: $"'{format}' is not a report format; use html (default) or pdf.");

@@ -43,7 +43,8 @@ public static class StudyBody
         {
             // A member given twice (which one would win?) or broken syntax, keyed by where the reader stopped.
             string? twice = DuplicateMemberFinder.Find(body);
-            errors[twice ?? SectionParser.ToPointer(ex.Path)] = [twice is null ? "Malformed JSON: " + ex.Message
+            errors[twice ?? SectionParser.ToPointer(ex.Path)] = [twice is null
+                ? $"is not valid JSON at line {ex.LineNumber + 1}, character {ex.BytePositionInLine + 1}: {ex.Message.Split(" LineNumber:")[0].Trim()}"
                 : "is given twice in its object; give each member once (which one should count?)."];
             return new Outcome(null, [], errors, false);
         }
@@ -60,6 +61,9 @@ public static class StudyBody
                     errors[$"/alternatives/{i}/changes"] = ["must be an object of JSON pointer → value, e.g. { \"/heads/0/total\": 7.5 }."];
                     continue;
                 }
+                foreach (var change in changes)
+                    if (SectionContract.CheckPointer(change.Key) is { } why)
+                        errors[$"/alternatives/{i}/changes/{change.Key.Replace("~", "~0").Replace("/", "~1")}"] = [$"'{change.Key}' {why}"];
                 string name = (alt["name"] as JsonValue)?.TryGetValue(out string? n) == true && !string.IsNullOrWhiteSpace(n) ? n! : $"alternative {i + 1}";
                 list.Add(new StudyAlternative(name, changes.Select(c => KeyValuePair.Create(c.Key, c.Value?.DeepClone())).ToList()));
             }
@@ -76,7 +80,7 @@ public static class StudyBody
     }
 
     // The base must be a valid section by itself; its problems are keyed under the base's pointer.
-    private static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
+    internal static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
     {
         var document = SectionParser.Parse(json, out var parseProblems);
         var problems = document is null ? parseProblems : SectionValidator.Validate(document).Problems;
@@ -84,7 +88,7 @@ public static class StudyBody
         return problems.Count == 0 ? JsonNode.Parse(json) as JsonObject : null;
     }
 
-    private static async Task<string?> ReadTextAsync(HttpRequest request, CancellationToken cancellation)
+    internal static async Task<string?> ReadTextAsync(HttpRequest request, CancellationToken cancellation)
     {
         if (request.ContentLength > SectionBody.MaxBytes) return null;
         using var buffer = new MemoryStream();

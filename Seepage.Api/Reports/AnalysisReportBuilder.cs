@@ -14,6 +14,8 @@ public static class AnalysisReportBuilder
     public static ReportDocument Build(AnalysisResultDto r, FieldDto field, SectionDocument section, DateTimeOffset printed,
         PresentationUnits? units = null)
     {
+        // The section as analysed is in metres and kN/m³ with every default filled, as the memo's units say.
+        if (r.AnalysedSection is { } analysed && SectionParser.Parse(analysed.ToJsonString(), out _) is { } si) section = si;
         var u = units ?? PresentationUnits.Si;
         string k = u.IsSi ? section.ConductivityUnit ?? "m/s" : u.ConductivityUnit;
         string L = u.LengthUnit;
@@ -49,6 +51,7 @@ public static class AnalysisReportBuilder
             blocks.Add(new ReportFigure("Upward exit gradient along the exit surface with the allowable gradient (critical gradient / required factor).", exitFigure));
         blocks.Add(new ReportTable(ChecksCaption, ChecksHeaders, [.. Checks(r, u), .. AnalysisReportExtras.CheckRows(r, u)]));
         blocks.AddRange(AnalysisReportExtras.Blocks(r));
+        blocks.AddRange(AssumptionBlocks.Blocks(r));
         if (r.Warnings.Count > 0) { blocks.Add(new ReportHeading("Warnings")); blocks.Add(new ReportList(r.Warnings)); }
         blocks.Add(new ReportHeading("3. Methods and sources"));
         blocks.Add(new ReportList(Methods(r, section)));
@@ -97,8 +100,9 @@ public static class AnalysisReportBuilder
             rows.Add(Row("Factor against piping i_c / i_exit", "critical gradient (Gs − 1)/(1 + e)", N(e.Factor), N(e.RequiredFactor), Verdict(e.Pass)));
         }
         foreach (var h in r.Heave)
-            rows.Add(Row($"Heave at {h.Cutoff} (D = {N(u.Length(h.Depth))} {L}, h_a = {N(u.Length(h.AverageExcessHead))} {L})", "Terzaghi's prism, width D/2",
-                N(h.Factor), N(h.RequiredFactor), Verdict(h.Pass)));
+            rows.Add(Row($"Heave at {h.Cutoff} (D = {N(u.Length(h.Depth))} {L}, h_a = {N(u.Length(h.AverageExcessHead))} {L})",
+                "Terzaghi's prism, width D/2",
+                N(h.Factor), N(h.RequiredFactor), h.Skipped is null ? Verdict(h.Pass) : "not an exit: " + h.Skipped));
         if (r.Creep is { } c)
         {
             rows.Add(Row($"Lane weighted creep ratio (L_w = {N(u.Length(c.Lane.WeightedLength))} {L})", "Lane 1935", N(c.Lane.Ratio), N(c.Lane.Required), Verdict(c.Lane.Pass)));

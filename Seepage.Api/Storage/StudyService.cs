@@ -108,7 +108,7 @@ public sealed class StudyService(StudyStore studies, AnalysisStore analyses, IHo
         var rowDto = new StudyRowDto(row.Index, row.Name, alternative.Changes.ToDictionary(c => c.Key, c => c.Value?.DeepClone()),
             row.Analysed, row.Problems.GroupBy(p => p.Pointer).ToDictionary(g => g.Key, g => g.Select(p => p.Message).ToArray()),
             analysisId, row.Flow, row.UpliftForce, row.MaxExitGradient, row.ExitFactor, row.ExitRequiredFactor, row.HeaveFactor,
-            row.HeaveRequiredFactor, row.Pass, row.Seconds);
+            row.HeaveRequiredFactor, row.Pass, row.Seconds, row.ExitPass, row.HeavePass, row.LanePass, row.BlighPass, row.PassCovers);
         string json;
         lock (run)
         {

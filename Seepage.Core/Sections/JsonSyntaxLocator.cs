@@ -21,7 +21,7 @@ internal static class JsonSyntaxLocator
         var frames = new List<Frame>();
         var reader = new Utf8JsonReader(Encoding.UTF8.GetBytes(json), new JsonReaderOptions
         {
-            CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true, MaxDepth = 64,
+            CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true, MaxDepth = 32, // as the parser: a too-deep text fails here too
         });
         try
         {

@@ -48,6 +48,12 @@ public sealed record SectionModel(
     /// <summary>Head drops Nd of the flow net from <c>flowNet.headDrops</c>; null chooses Nd for square cells.</summary>
     public int? FlowNetHeadDrops { get; init; }
 
+    /// <summary>The section document as analysed: in metres and kN/m³, every default the analysis uses filled in.</summary>
+    public SectionDocument? Analysed { get; init; }
+
+    /// <summary>Each value the analysis used for a member with a default, and whether it was given or defaulted.</summary>
+    public IReadOnlyList<Assumption> Assumptions { get; init; } = [];
+
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }

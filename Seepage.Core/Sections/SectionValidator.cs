@@ -20,6 +20,7 @@ public static class SectionValidator
         var warnings = new List<string>();
         var reader = new PointReader(problems);
 
+        var posted = doc;
         doc = SectionUnits.ToSi(doc, problems);
         // An unknown unit is one problem: NaN keeps the conductivity range checks from adding follow-on ones.
         string? unit = SectionEnumerations.Read(doc.ConductivityUnit, "m/s", SectionEnumerations.ConductivityUnits,
@@ -74,6 +75,7 @@ public static class SectionValidator
             problems.Add(new("/heads", $"every fixed head is {heads[0].Total} m and there is no drain: nothing drives a flow."));
 
         var exit = ReadExit(doc.ExitCheck, heads, domain, tolerance, reader, problems);
+        ExitSurfaceCheck.Check(doc, exit, heads, drains, tolerance, problems);
         double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? 1.5;
         if (!double.IsFinite(heaveFactor) || heaveFactor <= 0)
             problems.Add(new("/heaveCheck/requiredFactor", "must be a positive number."));
@@ -102,7 +104,8 @@ public static class SectionValidator
             Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces,
             FlowNetHeadDrops = headDrops,
         };
-        return new ValidationOutcome(model, problems);
+        var (analysed, assumptions) = SectionAssumptions.Build(doc, posted, model, unit!, warnings);
+        return new ValidationOutcome(model with { Analysed = analysed, Assumptions = assumptions }, problems);
     }
 
     private static List<Soil> ReadSoils(List<SoilDocument>? docs, double unitFactor, List<SectionProblem> problems)

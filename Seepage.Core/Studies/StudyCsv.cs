@@ -32,6 +32,8 @@ public static class StudyCsv
                     else if (pointers.FindIndex(p => p.Pointer == pointer) is var first and >= 0)
                         problems.Add(new ImportProblem(cell(j),
                             $"repeats the column {new CellRef(grid.Name, r + 1, pointers[first].Column + 1)} ('{SafeText.Of(pointer)}'); each member is varied in one column."));
+                    else if (Sections.SectionContract.CheckPointer(pointer) is { } why)
+                        problems.Add(new ImportProblem(cell(j), $"'{SafeText.Of(pointer)}' {why}"));
                     else pointers.Add((j, pointer));
                 }
                 if (pointers.Count == 0 && problems.Count == 0)

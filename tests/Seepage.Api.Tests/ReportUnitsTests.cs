@@ -40,8 +40,8 @@ public class ReportUnitsTests
         string siTable = FiguresTable(await client.GetStringAsync($"/api/v1/analyses/{id}/report"));
         foreach (var unit in new[] { "m³/s per m", "kN/m", " m)" }) Assert.Contains(unit, siTable);   // the check below can fail
         string table = FiguresTable(await client.GetStringAsync($"/api/v1/analyses/{id}/report?units=us"));
-        foreach (var si in new[] { " m)", " m,", " m ", "m³", "kN", "kPa", "L/min", "m/s" })
-            Assert.DoesNotContain(si, table);
+        foreach (var siUnit in new[] { " m)", " m,", " m ", "m³", "kN", "kPa", "L/min", "m/s" })
+            Assert.DoesNotContain(siUnit, table);
         Assert.Contains("ft³/day per ft", table);
         Assert.Contains("gal/min per ft", table);
         Assert.Contains("kip/ft", table);
