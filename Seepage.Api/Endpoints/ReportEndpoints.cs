@@ -62,7 +62,8 @@ public static class ReportEndpoints
         var field = await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation);
         var sectionJson = await store.GetJsonAsync(id, AnalysisPart.Section, cancellation);
         if (result is null || field is null || sectionJson is null) return NotFound("analysis", id);
-        var section = SectionParser.Parse(sectionJson, out _) ?? new SectionDocument();
+        // The memo is written from the section in SI (a section posted in ft and pcf is converted as the analysis was).
+        var section = SectionUnits.ToSi(SectionParser.Parse(sectionJson, out _) ?? new SectionDocument(), []);
         return Render(AnalysisReportBuilder.Build(result, field, section, DateTimeOffset.UtcNow, u), format, $"seepage-{id}.pdf");
     }
 

@@ -4,7 +4,7 @@
 // Creep classes of the hand creep checks (Lane 1935, Bligh 1910), as the service's creep tables name them.
 const CREEP_CLASSES = ['very-fine-sand-or-silt', 'fine-sand', 'medium-sand', 'coarse-sand', 'fine-gravel', 'medium-gravel',
   'coarse-gravel', 'boulders', 'soft-clay', 'medium-clay', 'hard-clay', 'very-hard-clay'];
-const CONDUCTIVITY_UNITS = ['m/s', 'cm/s', 'm/day', 'ft/day'];
+const CONDUCTIVITY_UNITS = ['m/s', 'cm/s', 'm/day', 'ft/day', 'ft/min'];
 const YES_NO = ['true', 'false'];
 
 const num = (key, label, hint, size = 6) => ({ key, label, hint, kind: 'number', size });
@@ -16,7 +16,9 @@ export const FORM_BLOCKS = [
   { title: 'Section', at: '', fields: [
     text('title', 'title', 'Title of the section', 24),
     { key: 'conductivityUnit', label: 'k unit', hint: 'Unit of kx, ky (default m/s)', kind: 'text', options: CONDUCTIVITY_UNITS, blank: 'm/s (default)' },
-    num('waterUnitWeight', 'γw (kN/m³)', 'Unit weight of water, default 9.81 kN/m³'),
+    { key: 'lengthUnit', label: 'length unit', hint: 'Unit of every coordinate, size and depth (default m)', kind: 'text', options: ['m', 'ft'], blank: 'm (default)' },
+    { key: 'unitWeightUnit', label: 'γ unit', hint: 'Unit of the unit weights (default kN/m³)', kind: 'text', options: ['kN/m3', 'pcf'], blank: 'kN/m3 (default)' },
+    num('waterUnitWeight', 'γw', 'Unit weight of water in the γ unit, default 9.81 kN/m³'),
     num('structureLength', 'length (m)', 'Length of the structure along its axis, for the total flow'),
   ] },
   { title: 'Soils', list: 'soils', item: 'soil', fields: [

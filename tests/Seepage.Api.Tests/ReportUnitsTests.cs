@@ -37,8 +37,8 @@ public class ReportUnitsTests
     {
         var (client, factory, id, result) = await Analyse();
         using var _ = factory;
-        string si = FiguresTable(await client.GetStringAsync($"/api/v1/analyses/{id}/report"));
-        foreach (var unit in new[] { "m³/s per m", "kN/m", " m)" }) Assert.Contains(unit, si);   // the check below can fail
+        string siTable = FiguresTable(await client.GetStringAsync($"/api/v1/analyses/{id}/report"));
+        foreach (var unit in new[] { "m³/s per m", "kN/m", " m)" }) Assert.Contains(unit, siTable);   // the check below can fail
         string table = FiguresTable(await client.GetStringAsync($"/api/v1/analyses/{id}/report?units=us"));
         foreach (var siUnit in new[] { " m)", " m,", " m ", "m³", "kN", "kPa", "L/min", "m/s" })
             Assert.DoesNotContain(siUnit, table);
