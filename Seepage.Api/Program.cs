@@ -15,6 +15,7 @@ app.MapSectionEndpoints();
 app.MapExampleEndpoints();
 app.MapImportEndpoints();
 app.MapStudyEndpoints();
+app.MapStoredWorkEndpoints();
 app.MapReportEndpoints();
 app.MapSystemExportEndpoints();
 app.LogPageAddress();

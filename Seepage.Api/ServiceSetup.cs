@@ -7,16 +7,15 @@ namespace Seepage.Api;
 public static class ServiceSetup
 {
     /// <summary>Configuration key of the SQLite database file. Default: data/seepage.db under the content root.</summary>
-    public const string DatabasePathKey = "Storage:DatabasePath";
+    public const string DatabasePathKey = StorageSetup.DatabasePathKey;
 
     public static IServiceCollection AddSeepageServices(this IServiceCollection services, IConfiguration configuration,
         IWebHostEnvironment environment)
     {
-        string path = configuration[DatabasePathKey] ?? Path.Combine(environment.ContentRootPath, "data", "seepage.db");
-        services.AddSingleton(new AnalysisStore(path));
+        services.AddSeepageStorage(configuration, environment);
         services.AddSingleton<AnalysisService>();
-        services.AddSingleton(new StudyStore(path));
         services.AddSingleton<StudyService>();
+        services.AddSingleton<Application.IStudyScheduler, InProcessStudyScheduler>();
         services.AddSingleton<ExampleCatalog>();
         services.AddProblemDetails();
         services.ConfigureHttpJsonOptions(o => o.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);

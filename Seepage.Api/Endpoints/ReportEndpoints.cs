@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Reports;
 using Seepage.Api.Storage;
@@ -51,11 +52,11 @@ public static class ReportEndpoints
     }
 
     public static async Task<Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult>> AnalysisReport(string id, string? format,
-        AnalysisService service, AnalysisStore store, CancellationToken cancellation)
+        AnalysisService service, IAnalysisStore store, CancellationToken cancellation)
     {
         if (Format(format) is { } bad) return bad;
-        var result = await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation);
-        var field = await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation);
+        var result = await service.GetResultAsync(id, cancellation);
+        var field = await service.GetFieldAsync(id, cancellation);
         var sectionJson = await store.GetJsonAsync(id, AnalysisPart.Section, cancellation);
         if (result is null || field is null || sectionJson is null) return NotFound("analysis", id);
         var section = SectionParser.Parse(sectionJson, out _) ?? new SectionDocument();
@@ -75,11 +76,11 @@ public static class ReportEndpoints
     }
 
     public static async Task<Results<ContentHttpResult, ProblemHttpResult>> UpliftCsv(string id, AnalysisService service, CancellationToken cancellation) =>
-        await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
+        await service.GetResultAsync(id, cancellation) is { } r
             ? TypedResults.Content(StationCsv.Uplift(r), Csv) : NotFound("analysis", id);
 
     public static async Task<Results<ContentHttpResult, ProblemHttpResult>> ExitCsv(string id, AnalysisService service, CancellationToken cancellation) =>
-        await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
+        await service.GetResultAsync(id, cancellation) is { } r
             ? TypedResults.Content(StationCsv.Exit(r), Csv) : NotFound("analysis", id);
 
     private static Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult> Render(ReportDocument report, string? format, string fileName)

@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 
@@ -36,7 +37,7 @@ public static class StudyEndpoints
     }
 
     public static async Task<Results<Created<StudyDto>, Accepted<StudyDto>, ContentHttpResult, ValidationProblem, ProblemHttpResult>> Create(
-        HttpRequest request, StudyService service, AnalysisStore store, ExampleCatalog catalog, string? @base, bool? background,
+        HttpRequest request, StudyService service, IAnalysisStore store, ExampleCatalog catalog, string? @base, bool? background,
         string? format, CancellationToken cancellation)
     {
         var body = await StudyBody.ReadAsync(request, @base, store, catalog, cancellation);
