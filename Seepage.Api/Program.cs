@@ -1,5 +1,6 @@
 using Seepage.Api;
 using Seepage.Api.Endpoints;
+using Seepage.Api.Storage;
 
 var builder = WebApplication.CreateBuilder(new WebApplicationOptions { Args = args, WebRootPath = ServiceSetup.PageFolder() });
 builder.Services.AddSeepageServices(builder.Configuration, builder.Environment);
@@ -16,6 +17,7 @@ app.MapExampleEndpoints();
 app.MapImportEndpoints();
 app.MapStudyEndpoints();
 app.MapStoredWorkEndpoints();
+app.MapSeepageHealth();
 app.MapReportEndpoints();
 app.MapSystemExportEndpoints();
 app.LogPageAddress();

@@ -1,4 +1,5 @@
 using Seepage.Api.Endpoints;
+using Seepage.Api.Jobs;
 using Seepage.Api.Storage;
 
 namespace Seepage.Api;
@@ -12,10 +13,11 @@ public static class ServiceSetup
     public static IServiceCollection AddSeepageServices(this IServiceCollection services, IConfiguration configuration,
         IWebHostEnvironment environment)
     {
-        services.AddSeepageStorage(configuration, environment);
+        var db = services.AddSeepageStorage(configuration, environment);
+        services.AddSeepageJobs(configuration, db);
+        services.AddSeepageHealth();
         services.AddSingleton<AnalysisService>();
         services.AddSingleton<StudyService>();
-        services.AddSingleton<Application.IStudyScheduler, InProcessStudyScheduler>();
         services.AddSingleton<ExampleCatalog>();
         services.AddProblemDetails();
         services.ConfigureHttpJsonOptions(o => o.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);

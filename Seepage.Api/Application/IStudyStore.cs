@@ -25,6 +25,9 @@ public interface IStudyStore
     /// <summary>The definition (JSON <c>{ base, alternatives }</c>) of one study, or null when the id is unknown.</summary>
     Task<string?> GetDefinitionAsync(string id, CancellationToken cancellation);
 
+    /// <summary>Id and number of alternatives of every study whose status is <c>running</c>.</summary>
+    Task<IReadOnlyList<(string Id, int Total)>> RunningAsync(CancellationToken cancellation);
+
     /// <summary>A page of studies, newest first.</summary>
     Task<ListPage<StudyListing>> ListAsync(ListQuery query, CancellationToken cancellation);
 

@@ -28,7 +28,7 @@ public static class StudyEndpoints
         group.MapGet("/{id}", Get)
             .WithName("GetStudy")
             .WithSummary("Read a study and its progress")
-            .WithDescription("Returns the study: status (running, done, failed, cancelled, interrupted), done/total and the rows finished so far; " +
+            .WithDescription("Returns the study: status (running, done, cancelled), done/total and the rows finished so far; " +
                 "as CSV with Accept: text/csv or ?format=csv.")
             .Produces<StudyDto>(StatusCodes.Status200OK)
             .Produces(StatusCodes.Status200OK, contentType: "text/csv")

@@ -70,6 +70,16 @@ public sealed class SqlStudyStore(Database db) : IStudyStore
             as string;
     }
 
+    public async Task<IReadOnlyList<(string Id, int Total)>> RunningAsync(CancellationToken cancellation)
+    {
+        await using var connection = await db.OpenAsync(cancellation);
+        await using var command = Sql.Command(connection, null, "SELECT id, total FROM studies WHERE status = 'running'");
+        await using var reader = await command.ExecuteReaderAsync(cancellation);
+        var running = new List<(string, int)>();
+        while (await reader.ReadAsync(cancellation)) running.Add((reader.GetString(0), Int(reader.GetValue(1))));
+        return running;
+    }
+
     public Task<ListPage<StudyListing>> ListAsync(ListQuery query, CancellationToken cancellation) =>
         SqlListing.ReadAsync(db, "studies",
             $"id, created_at, title, status, total, {DoneColumn}", query,

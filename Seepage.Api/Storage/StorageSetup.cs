@@ -11,7 +11,8 @@ public static class StorageSetup
     public const string DatabasePathKey = "Storage:DatabasePath";
     public const string ConnectionName = "Seepage";
 
-    public static IServiceCollection AddSeepageStorage(this IServiceCollection services, IConfiguration configuration,
+    /// <summary>Registers the database and the stores; returns the database (the job engine keeps its queue there too).</summary>
+    public static Database AddSeepageStorage(this IServiceCollection services, IConfiguration configuration,
         IWebHostEnvironment environment)
     {
         var db = CreateDatabase(configuration, environment);
@@ -19,7 +20,7 @@ public static class StorageSetup
         services.AddSingleton<IAnalysisStore>(new SqlAnalysisStore(db));
         services.AddSingleton<IStudyStore>(new SqlStudyStore(db));
         services.AddHostedService<MigrationStartup>();
-        return services;
+        return db;
     }
 
     public static Database CreateDatabase(IConfiguration configuration, IWebHostEnvironment environment)
