@@ -39,6 +39,15 @@ public sealed record SectionModel(
     /// Null means "automatically for small models".</summary>
     public bool? TruncationCheck { get; init; }
 
+    /// <summary>Whether the phreatic surface is unknown (unconfined flow). Default false.</summary>
+    public bool Unconfined { get; init; }
+
+    /// <summary>Potential seepage faces: boundary polylines (m) where water may leave at h = y.</summary>
+    public IReadOnlyList<SeepageFace> SeepageFaces { get; init; } = [];
+
+    /// <summary>Head drops Nd of the flow net from <c>flowNet.headDrops</c>; null chooses Nd for square cells.</summary>
+    public int? FlowNetHeadDrops { get; init; }
+
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }
@@ -64,7 +73,12 @@ public sealed record Cutoff(string Name, Point2 Top, Point2 Tip)
 public sealed record HeadBoundary(string Name, IReadOnlyList<Point2> Along, double Total);
 
 /// <summary>A drain along a boundary polyline: pore pressure zero, so total head equals elevation.</summary>
-public sealed record DrainBoundary(string Name, IReadOnlyList<Point2> Along);
+public sealed record DrainBoundary(string Name, IReadOnlyList<Point2> Along)
+{
+    /// <summary>True when the drain runs (in part) inside the domain rather than along its boundary: an internal
+    /// constraint of the mesh taking water from both sides (a chimney filter, a blanket on a zone interface).</summary>
+    public bool Internal { get; init; }
+}
 
 /// <summary>The exit check: exit surface (polyline, m), averaging depth (m), required factor against piping.</summary>
 public sealed record ExitCheck(IReadOnlyList<Point2> Along, double Depth, double RequiredFactor, bool AlongGiven);
