@@ -1,6 +1,7 @@
 using Seepage.Api;
 using Seepage.Api.Admission;
 using Seepage.Api.Endpoints;
+using Seepage.Api.Storage;
 
 var builder = WebApplication.CreateBuilder(new WebApplicationOptions { Args = args, WebRootPath = ServiceSetup.PageFolder() });
 builder.Services.AddSeepageServices(builder.Configuration, builder.Environment);
@@ -21,6 +22,8 @@ app.MapImportEndpoints();
 app.MapStudyEndpoints();
 app.MapTargetSearchEndpoints();
 app.MapUncertaintyEndpoints();
+app.MapStoredWorkEndpoints();
+app.MapSeepageHealth();
 app.MapReportEndpoints();
 app.MapSystemExportEndpoints();
 app.LogPageAddress();

@@ -2,7 +2,8 @@ using System.Text.Json.Nodes;
 
 namespace Seepage.Api.Contracts;
 
-/// <summary>A study of design alternatives: its state (<c>running</c>, <c>done</c>, <c>failed</c>, <c>cancelled</c>, or <c>interrupted</c> when the server stopped while it ran), how many
+/// <summary>A study of design alternatives: its state (<c>running</c>, <c>done</c>, or <c>cancelled</c> when the client of a waiting study left; a background study
+/// cut off by a stopped server is picked up again by the job engine), how many
 /// of the <c>total</c> alternatives are <c>done</c>, the varied members (JSON pointers) and the rows finished so far, in the
 /// alternatives' order. <c>seconds</c> is the wall time so far.</summary>
 public sealed record StudyDto(

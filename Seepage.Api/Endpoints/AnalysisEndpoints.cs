@@ -1,6 +1,7 @@
 using Microsoft.Extensions.Options;
 using Seepage.Api.Admission;
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 using Seepage.Core.Meshing;
@@ -79,15 +80,15 @@ public static class AnalysisEndpoints
 
     public static async Task<Results<Ok<AnalysisResultDto>, ProblemHttpResult>> Get(string id, AnalysisService service,
         CancellationToken cancellation) =>
-        await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } dto
+        await service.GetResultAsync(id, cancellation) is { } dto
             ? TypedResults.Ok(dto) : NotFound(id);
 
     public static async Task<Results<Ok<FieldDto>, ProblemHttpResult>> GetField(string id, AnalysisService service,
         CancellationToken cancellation) =>
-        await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation) is { } dto
+        await service.GetFieldAsync(id, cancellation) is { } dto
             ? TypedResults.Ok(dto) : NotFound(id);
 
-    public static async Task<Results<ContentHttpResult, ProblemHttpResult>> GetSection(string id, AnalysisStore store,
+    public static async Task<Results<ContentHttpResult, ProblemHttpResult>> GetSection(string id, IAnalysisStore store,
         CancellationToken cancellation) =>
         await store.GetJsonAsync(id, AnalysisPart.Section, cancellation) is { } json
             ? TypedResults.Content(json, "application/json") : NotFound(id);

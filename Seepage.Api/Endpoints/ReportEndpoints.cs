@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Reports;
 using Seepage.Api.Storage;
@@ -54,12 +55,12 @@ public static class ReportEndpoints
     }
 
     public static async Task<Results<ContentHttpResult, FileContentHttpResult, ProblemHttpResult>> AnalysisReport(string id, string? format,
-        string? units, AnalysisService service, AnalysisStore store, CancellationToken cancellation)
+        string? units, AnalysisService service, IAnalysisStore store, CancellationToken cancellation)
     {
         if (Format(format) is { } bad) return bad;
         if (PresentationUnits.Parse(units) is not { } u) return UnknownUnits(units);
-        var result = await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation);
-        var field = await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation);
+        var result = await service.GetResultAsync(id, cancellation);
+        var field = await service.GetFieldAsync(id, cancellation);
         var sectionJson = await store.GetJsonAsync(id, AnalysisPart.Section, cancellation);
         if (result is null || field is null || sectionJson is null) return NotFound("analysis", id);
         // The memo is written from the section in SI (a section posted in ft and pcf is converted as the analysis was).
@@ -83,7 +84,7 @@ public static class ReportEndpoints
         CancellationToken cancellation)
     {
         if (PresentationUnits.Parse(units) is not { } u) return UnknownUnits(units);
-        return await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
+        return await service.GetResultAsync(id, cancellation) is { } r
             ? TypedResults.Content(StationCsv.Uplift(r, u), Csv) : NotFound("analysis", id);
     }
 
@@ -91,7 +92,7 @@ public static class ReportEndpoints
         CancellationToken cancellation)
     {
         if (PresentationUnits.Parse(units) is not { } u) return UnknownUnits(units);
-        return await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
+        return await service.GetResultAsync(id, cancellation) is { } r
             ? TypedResults.Content(StationCsv.Exit(r, u), Csv) : NotFound("analysis", id);
     }
 

@@ -1,6 +1,7 @@
 using System.Text;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using Seepage.Api.Application;
 using Seepage.Api.Storage;
 using Seepage.Core.Imports;
 using Seepage.Core.Sections;
@@ -15,7 +16,7 @@ public static class StudyBody
     public sealed record Outcome(JsonObject? Base, IReadOnlyList<StudyAlternative> Alternatives, Dictionary<string, string[]> Errors,
         bool TooLarge);
 
-    public static async Task<Outcome> ReadAsync(HttpRequest request, string? baseName, AnalysisStore store, ExampleCatalog catalog,
+    public static async Task<Outcome> ReadAsync(HttpRequest request, string? baseName, IAnalysisStore store, ExampleCatalog catalog,
         CancellationToken cancellation)
     {
         var body = await ReadTextAsync(request, cancellation);

@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 
@@ -27,7 +28,7 @@ public static class StudyEndpoints
         group.MapGet("/{id}", Get)
             .WithName("GetStudy")
             .WithSummary("Read a study and its progress")
-            .WithDescription("Returns the study: status (running, done, failed, cancelled, interrupted), done/total and the rows finished so far; " +
+            .WithDescription("Returns the study: status (running, done, cancelled), done/total and the rows finished so far; " +
                 "as CSV with Accept: text/csv or ?format=csv.")
             .Produces<StudyDto>(StatusCodes.Status200OK)
             .Produces(StatusCodes.Status200OK, contentType: "text/csv")
@@ -36,7 +37,7 @@ public static class StudyEndpoints
     }
 
     public static async Task<Results<Created<StudyDto>, Accepted<StudyDto>, ContentHttpResult, ValidationProblem, ProblemHttpResult>> Create(
-        HttpRequest request, StudyService service, AnalysisStore store, ExampleCatalog catalog, string? @base, bool? background,
+        HttpRequest request, StudyService service, IAnalysisStore store, ExampleCatalog catalog, string? @base, bool? background,
         string? format, CancellationToken cancellation)
     {
         var body = await StudyBody.ReadAsync(request, @base, store, catalog, cancellation);

@@ -1,5 +1,3 @@
-using System.Text.Json;
-using Seepage.Api.Contracts;
 using Seepage.Core;
 
 namespace Seepage.Api.Storage;
@@ -8,14 +6,6 @@ namespace Seepage.Api.Storage;
 /// own GET and memo like a posted one.</summary>
 public static class AnalysisRecords
 {
-    public static string Save(AnalysisStore store, AnalysisResult result, string sectionJson, CancellationToken cancellation)
-    {
-        string id = "a" + Guid.NewGuid().ToString("N")[..15];
-        var created = DateTimeOffset.UtcNow;
-        var dto = ResultMapper.ToDto(id, created, result);
-        var field = ResultMapper.ToFieldDto(id, result);
-        store.SaveAsync(new StoredAnalysis(id, created, dto.Title, sectionJson, JsonSerializer.Serialize(dto, AnalysisService.Json),
-            JsonSerializer.Serialize(field, AnalysisService.Json)), cancellation).GetAwaiter().GetResult();
-        return id;
-    }
+    public static string Save(AnalysisService analyses, AnalysisResult result, string sectionJson, CancellationToken cancellation) =>
+        analyses.StoreAsync(result, sectionJson, null, cancellation).GetAwaiter().GetResult().Id;
 }

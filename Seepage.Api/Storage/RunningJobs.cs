@@ -6,6 +6,11 @@ namespace Seepage.Api.Storage;
 /// POST …/{id}/cancel can stop one. A run removes itself when it ends.</summary>
 public sealed class RunningJobs
 {
+    /// <summary>A target search or uncertainty study still "running" that no process has written to for this long was
+    /// cut off (the server stopped); one analysis is limited to <see cref="AnalysisService.SolveBudget"/>, well below it.
+    /// (Studies are durable jobs and need no such rule; these two resources are not yet.)</summary>
+    public static readonly TimeSpan SilenceLimit = TimeSpan.FromMinutes(10);
+
     private readonly ConcurrentDictionary<string, CancellationTokenSource> _running = new();
 
     /// <summary>Registers a run; its token is cancelled by <see cref="Cancel"/> or when <paramref name="outer"/> is.</summary>

@@ -10,7 +10,7 @@ namespace Seepage.Api.Storage;
 
 /// <summary>Runs target searches (Core <see cref="TargetSearcher"/>): each point is analysed, stored as an analysis with its
 /// memo, and the search document is written as points finish, so GET /api/v1/target-searches/{id} reports progress.</summary>
-public sealed class TargetSearchService(DesignRunStore store, AnalysisStore analyses, RunningJobs jobs, IHostApplicationLifetime lifetime,
+public sealed class TargetSearchService(DesignRunStore store, AnalysisService analyses, RunningJobs jobs, IHostApplicationLifetime lifetime,
     ILogger<TargetSearchService> logger)
 {
     public const string Kind = "target-search";
@@ -53,7 +53,7 @@ public sealed class TargetSearchService(DesignRunStore store, AnalysisStore anal
     {
         if (await store.GetAsync(id, Kind, false, cancellation) is not { } stored) return null;
         var search = JsonSerializer.Deserialize<TargetSearchDto>(stored.Json, AnalysisService.Json)!;
-        return search.Status == "running" && DateTimeOffset.UtcNow - stored.Updated > StudyService.SilenceLimit
+        return search.Status == "running" && DateTimeOffset.UtcNow - stored.Updated > RunningJobs.SilenceLimit
             ? search with { Status = "interrupted" } : search;
     }
 

@@ -70,7 +70,7 @@ public sealed class UncertaintyService(DesignRunStore store, RunningJobs jobs, I
     {
         if (await store.GetAsync(id, Kind, false, cancellation) is not { } stored) return null;
         var study = JsonSerializer.Deserialize<UncertaintyStudyDto>(stored.Json, AnalysisService.Json)!;
-        return study.Status == "running" && DateTimeOffset.UtcNow - stored.Updated > StudyService.SilenceLimit
+        return study.Status == "running" && DateTimeOffset.UtcNow - stored.Updated > RunningJobs.SilenceLimit
             ? study with { Status = "interrupted" } : study;
     }
 

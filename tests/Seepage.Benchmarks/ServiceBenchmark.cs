@@ -87,7 +87,7 @@ public static class ServiceBenchmark
     }
 
     // Any type of the API assembly names its entry point (this program has a Program class of its own).
-    private sealed class LoopbackFactory(string databasePath) : WebApplicationFactory<Seepage.Api.Storage.AnalysisStore>
+    private sealed class LoopbackFactory(string databasePath) : WebApplicationFactory<Seepage.Api.Storage.AnalysisService>
     {
         protected override void ConfigureWebHost(IWebHostBuilder builder)
         {

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.Json;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 using Seepage.Core;
@@ -9,7 +10,7 @@ namespace Seepage.Benchmarks;
 /// <summary>
 /// CPU time of each stage of one analysis of the design example, as the service runs it: the Core stages (reported
 /// by <see cref="AnalysisOptions.StageDone"/>), then the result and field documents mapped and serialised to JSON and
-/// the SQLite insert. Prints <c>stage name=S cpuMs=median</c> per stage and <c>stage name=total …</c>, medians of
+/// the SQLite insert (field data in its compact stored form). Prints <c>stage name=S cpuMs=median</c> per stage and <c>stage name=total …</c>, medians of
 /// <c>--runs</c> (default 20) runs after 3 warm-ups. Options: <c>--size m</c>, <c>--order 1|2</c>.
 /// </summary>
 public static class StageBenchmark
@@ -27,7 +28,7 @@ public static class StageBenchmark
         string json = DesignSection.Json(size, order);
         var model = DesignSection.Model(json);
         string db = System.IO.Path.Combine(System.IO.Path.GetTempPath(), $"seepage-bench-{Guid.NewGuid():N}.db");
-        var store = new AnalysisStore(db);
+        var store = new SqlAnalysisStore(new SqliteDatabase(db));
         var times = new Dictionary<string, List<double>>();
         var names = new List<string>();
         AnalysisResult? last = null;
@@ -48,10 +49,11 @@ public static class StageBenchmark
                 var dto = ResultMapper.ToDto(id, DateTimeOffset.UtcNow, result);
                 string resultJson = JsonSerializer.Serialize(dto, AnalysisService.Json);
                 Done("resultJson");
-                string fieldJson = JsonSerializer.Serialize(ResultMapper.ToFieldDto(id, result), AnalysisService.Json);
+                var field = ResultMapper.ToFieldDto(id, result);
+                _ = JsonSerializer.Serialize(field, AnalysisService.Json);       // what GET …/field serialises
                 Done("fieldJson");
-                store.SaveAsync(new StoredAnalysis(id, DateTimeOffset.UtcNow, dto.Title, json, resultJson, fieldJson),
-                    CancellationToken.None).GetAwaiter().GetResult();
+                store.SaveAsync(new StoredAnalysis(id, DateTimeOffset.UtcNow, dto.Title, json, resultJson, FieldCodec.Encode(field), "{}"),
+                    CancellationToken.None).GetAwaiter().GetResult();          // compact field form, compressed result
                 Done("store");
                 last = result;
                 if (r < 3) continue;
