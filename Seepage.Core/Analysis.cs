@@ -4,6 +4,7 @@ using Seepage.Core.Meshing;
 using Seepage.Core.Results;
 using Seepage.Core.Sections;
 using Seepage.Core.Solvers;
+using Seepage.Core.Unconfined;
 
 namespace Seepage.Core;
 
@@ -21,7 +22,8 @@ public static class Analysis
         var warnings = new List<string>(section.Warnings);
 
         var mesh = MakeMesh(section, warnings, cancellation);
-        var solution = FieldSolver.Solve(section, mesh, section.Mesh.Order, options.Solver, cancellation);
+        var free = section.Unconfined ? UnconfinedSolver.Solve(section, mesh, options.Unconfined, options.Solver, cancellation) : null;
+        var solution = free?.Solution ?? FieldSolver.Solve(section, mesh, section.Mesh.Order, options.Solver, cancellation);
         var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
         double tolerance = 1e-6 * section.Extent;
 
@@ -34,9 +36,12 @@ public static class Analysis
         var creep = CreepCalculator.Compute(section, exitSoil);
         var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
         var gauges = GaugeCalculator.Compute(section, sampler, reactions, fixedHeads.IsFixed);
-        var convergence = section.Mesh.ConvergenceCheck
+        var convergence = section.Mesh.ConvergenceCheck && !Skipped(free, "mesh.convergenceCheck", warnings)
             ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
-        var truncation = section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
+        bool runTruncation = free is null
+            ? section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
+            : section.TruncationCheck == true && !Skipped(free, "truncationCheck", warnings);
+        var truncation = runTruncation
             ? TruncationCheck.Run(section, flow.PerMetre, section.Mesh.Order, s => MakeMesh(s, [], cancellation), options.Solver, warnings, cancellation)
             : null;
 
@@ -44,15 +49,41 @@ public static class Analysis
         if (options.FlowNet)
         {
             // The flow net is drawn from the vertex heads (the P1 part of a quadratic field).
-            var psi = StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
+            var psi = section.Drains.Any(d => d.Internal)
+                ? NoFlowLines(warnings)
+                : StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
-            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops);
+            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops,
+                field.ElementFactors?.Select(f => f >= 0.5).ToArray());
         }
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
         return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
-            clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
+            clock.Elapsed.TotalSeconds)
+        {
+            IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation,
+            Unconfined = free?.Report,
+            PhreaticSurface = free is null ? [] : PhreaticSurfaceTracer.Trace(mesh, field.Heads),
+            SeepageFaces = free is null ? [] : SeepageFaceCalculator.Compute(section, boundary, fixedHeads, free.FaceNodes, reactions, tolerance),
+            HandMethods = free is null ? null : EmbankmentHandMethods.For(section, flow.PerMetre),
+        };
+    }
+
+    // The re-analyses on other meshes solve the confined problem; for an unconfined section they are not run (and
+    // the warning says so) rather than giving figures of a different problem.
+    private static bool Skipped(UnconfinedSolution? free, string member, List<string> warnings)
+    {
+        if (free is null) return false;
+        warnings.Add($"{member} was not run: it is not yet available for unconfined sections.");
+        return true;
+    }
+
+    private static double[]? NoFlowLines(List<string> warnings)
+    {
+        warnings.Add("Flow lines were not drawn: a drain inside the domain takes water from both sides, so no single "
+            + "stream function describes the flow. Equipotentials are drawn.");
+        return null;
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>

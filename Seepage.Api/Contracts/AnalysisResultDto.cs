@@ -18,7 +18,11 @@ public sealed record AnalysisResultDto(
     IndependentVariablesDto? IndependentVariables = null,
     IReadOnlyList<GaugeDto>? Gauges = null,
     ConvergenceDto? Convergence = null,
-    TruncationDto? Truncation = null);
+    TruncationDto? Truncation = null,
+    IReadOnlyList<PhreaticLineDto>? PhreaticSurface = null,
+    IReadOnlyList<SeepageFaceDto>? SeepageFaces = null,
+    UnconfinedDto? Unconfined = null,
+    HandMethodsDto? HandMethods = null);
 
 /// <summary>Seepage discharge per metre of structure. <c>perMetre</c>, <c>inflow</c>, <c>outflow</c> in m³/s per m;
 /// <c>balance</c> = (inflow − outflow) / inflow, dimensionless;
@@ -27,7 +31,7 @@ public sealed record FlowDto(double PerMetre, string Unit, double Inflow, double
     double PerMetrePerDay, double LitresPerMinutePerMetre, IReadOnlyList<BoundaryFlowDto> Boundaries,
     double? StructureLength = null, double? Total = null, double? TotalPerDay = null);
 
-/// <summary>Flow through one head or drain boundary, m³/s per m, positive into the soil.</summary>
+/// <summary>Flow through one head, drain or seepage-face boundary (<c>kind</c>), m³/s per m, positive into the soil.</summary>
 public sealed record BoundaryFlowDto(string Name, string Kind, double Flow);
 
 /// <summary>Uplift under one structure: stations (x, y in m, total head in m, pore pressure in kPa),

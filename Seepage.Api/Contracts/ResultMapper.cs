@@ -34,7 +34,22 @@ public static class ResultMapper
             r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length, g.Method, g.LineIntegral)).ToList(),
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
-            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null);
+            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null,
+            r.PhreaticSurface.Select(l => new PhreaticLineDto(Line(l.Points))).ToList(),
+            r.SeepageFaces.Select(x => new SeepageFaceDto(x.Name, x.Flow, Pair(x.ExitPoint), x.WettedLength)).ToList(),
+            r.Unconfined is { } u ? new UnconfinedDto(u.Iterations, u.Method, u.Change, u.Band, u.Floor, u.LinearIterations, u.Seconds) : null,
+            r.HandMethods is { } hm ? new HandMethodsDto(hm.ReservoirDepth, hm.Estimates.Select(x =>
+                new HandEstimateDto(x.Method, x.Source, x.Applies, x.Note, x.Flow, Pair(x.ExitPoint), x.Difference)).ToList()) : null);
+    }
+
+    private static double[]? Pair(Point2? p) => p is { } v ? [Math.Round(v.X, 5), Math.Round(v.Y, 5)] : null;
+
+    private static UnconfinedFieldDto? UnconfinedField(AnalysisResult r)
+    {
+        if (r.Unconfined is null || r.Field.ElementFactors is not { } kr) return null;
+        var p = Seepage.Core.Results.PhreaticSurfaceTracer.PressureHead(r.Mesh, r.Field.Heads);
+        return new UnconfinedFieldDto(p.Select(v => Math.Round(v, 6)).ToArray(), kr.Select(Significant).ToArray(),
+            r.PhreaticSurface.Select(l => Line(l.Points)).ToList());
     }
 
     public static FieldDto ToFieldDto(string id, AnalysisResult r)
@@ -61,7 +76,7 @@ public static class ResultMapper
         }
         return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
             equipotentials, flowLines, counts, walls, gradients, velocities,
-            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList());
+            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList(), UnconfinedField(r));
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :

@@ -14,7 +14,7 @@ public static class FlowNetBuilder
     public const int DefaultHeadDrops = 12;
 
     public static FlowNet Build(HeadField field, double[]? psi, double discharge, double highHead, double lowHead,
-        double referenceConductivity, int headDrops = DefaultHeadDrops)
+        double referenceConductivity, int headDrops = DefaultHeadDrops, bool[]? saturated = null)
     {
         double dh = highHead - lowHead;
         var equipotentials = new List<Equipotential>();
@@ -22,7 +22,7 @@ public static class FlowNetBuilder
             for (int k = 1; k < headDrops; k++)
             {
                 double level = highHead - k * dh / headDrops;
-                equipotentials.Add(new Equipotential(level, Paths(field, field.Heads, level)));
+                equipotentials.Add(new Equipotential(level, Paths(field, field.Heads, level, saturated)));
             }
         double shape = dh > 0 && referenceConductivity > 0 ? discharge / (referenceConductivity * dh) : 0;
         int channels = Math.Clamp((int)Math.Round(shape * headDrops), 2, 24);
@@ -33,12 +33,12 @@ public static class FlowNetBuilder
             for (int k = 1; k < channels; k++)
             {
                 double fraction = (double)k / channels;
-                flowLines.Add(new FlowLine(fraction, Paths(field, psi, lo + fraction * (hi - lo))));
+                flowLines.Add(new FlowLine(fraction, Paths(field, psi, lo + fraction * (hi - lo), saturated)));
             }
         }
         return new FlowNet(equipotentials, flowLines, channels, headDrops, shape, dh, referenceConductivity, psi);
     }
 
-    private static List<IReadOnlyList<Point2>> Paths(HeadField field, double[] values, double level) =>
-        ContourTracer.Trace(field.Mesh, values, level).Select(p => (IReadOnlyList<Point2>)p).ToList();
+    private static List<IReadOnlyList<Point2>> Paths(HeadField field, double[] values, double level, bool[]? saturated) =>
+        ContourTracer.Trace(field.Mesh, values, level, saturated).Select(p => (IReadOnlyList<Point2>)p).ToList();
 }

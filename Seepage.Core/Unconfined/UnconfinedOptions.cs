@@ -4,8 +4,8 @@ namespace Seepage.Core.Unconfined;
 public sealed record UnconfinedOptions
 {
     /// <summary>Width δ of the pressure-head band over which k_r falls from 1 to the floor, as a fraction of the
-    /// section's height H (highest fixed head minus lowest node, m). Default 0.005 (δ = 0.5 % of H).</summary>
-    public double BandFraction { get; init; } = 0.005;
+    /// section's height H (highest fixed head minus lowest node, m). Default 0.001 (δ = 0.1 % of H).</summary>
+    public double BandFraction { get; init; } = 0.001;
 
     /// <summary>Relative conductivity floor f of unsaturated soil (dimensionless). Default 1e-5: the flow carried
     /// above the phreatic surface is then of order 1e-5 of the discharge.</summary>

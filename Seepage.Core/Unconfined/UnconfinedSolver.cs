@@ -44,7 +44,9 @@ public static class UnconfinedSolver
         var factors = new double[mesh.TriangleCount]; Array.Fill(factors, 1.0);
         double[]? h = null;
         double previous = double.PositiveInfinity, change = double.NaN, omega = 1;
-        int linear = 0;
+        int linear = 0, builtFor = -1, lastIterations = 0, freshIterations = 0;
+        IPreconditioner? preconditioner = null;
+        bool switchedSinceBuild = false;
         for (int iteration = 1; ; iteration++)
         {
             cancellation.ThrowIfCancellationRequested();
@@ -56,7 +58,19 @@ public static class UnconfinedSolver
             var system = LinearSystem.Condense(full, fixedHeads);
             var free = new double[system.Matrix.Size];
             if (h is not null) for (int r = 0; r < free.Length; r++) free[r] = h[system.FreeNodes[r]];
-            var report = LinearSolver.Solve(system.Matrix, system.Rhs, free, solver with { RelativeTolerance = inner }, cancellation);
+            // The AMG hierarchy of an earlier iteration still preconditions CG well while the free set is the same and
+            // k_r has moved little; it is rebuilt when the switch changed or CG needs twice its fresh iteration count.
+            bool rebuild = preconditioner is null || builtFor != system.Matrix.Size || switchedSinceBuild
+                || lastIterations > Math.Max(8, 2 * freshIterations);
+            if (rebuild)
+            {
+                preconditioner = new AlgebraicMultigridPreconditioner(system.Matrix, solver, cancellation);
+                builtFor = system.Matrix.Size; switchedSinceBuild = false;
+            }
+            var report = ConjugateGradient.Solve(system.Matrix, system.Rhs, free, preconditioner!,
+                solver with { RelativeTolerance = inner }, cancellation);
+            lastIterations = report.Iterations;
+            if (rebuild) freshIterations = report.Iterations;
             linear += report.Iterations;
             var star = system.Expand(free);
             var reactions = new double[star.Length];
@@ -64,6 +78,7 @@ public static class UnconfinedSolver
             double flowScale = 0;
             for (int i = 0; i < star.Length; i++) if (fixedHeads.IsFixed[i]) flowScale += Math.Abs(reactions[i]);
             int switched = faces.Update(star, reactions, y, flowScale, height);
+            switchedSinceBuild |= switched > 0;
 
             if (h is null) { change = height; h = star; }
             else
