@@ -18,6 +18,7 @@ public sealed record UnconfinedOptions
     /// <summary>Iteration cap; the iteration throws with its figures when it is reached. Default 300.</summary>
     public int MaxIterations { get; init; } = 300;
 
-    /// <summary>Smallest damping factor ω of the update h ← h + ω (h* − h). Default 0.2.</summary>
-    public double MinDamping { get; init; } = 0.2;
+    /// <summary>Smallest damping factor ω of the update h ← h + ω (h* − h). Default 0.05: on fine meshes the undamped
+    /// map is not a contraction and a floor of 0.2 left a 200k-triangle embankment in a limit cycle.</summary>
+    public double MinDamping { get; init; } = 0.05;
 }

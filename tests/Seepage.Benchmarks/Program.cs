@@ -1,4 +1,4 @@
-// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mesh|solve> [options]`.
+// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mesh|solve|unconfined> [options]`.
 // Each mode prints one fixed-format line per size (see MeshBenchmark and SolveBenchmark).
 using Seepage.Benchmarks;
 
@@ -8,7 +8,8 @@ switch (mode)
 {
     case "mesh": MeshBenchmark.Run(rest); return 0;
     case "solve": SolveBenchmark.Run(rest); return 0;
+    case "unconfined": UnconfinedBenchmark.Run(rest); return 0;
     default:
-        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve> [options]");
+        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|unconfined> [options]");
         return 1;
 }

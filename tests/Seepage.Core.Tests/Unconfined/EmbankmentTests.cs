@@ -58,4 +58,29 @@ public class EmbankmentTests(ITestOutputHelper output)
         double[] sizes = [Error(0.0002, 1e-5, 1.0), Error(0.0002, 1e-5, 0.5), Error(0.0002, 1e-5, 0.25)];
         Assert.True(sizes[2] < 0.005 && Math.Abs(sizes[2] - sizes[1]) < 0.001, string.Join(", ", sizes));
     }
+
+    // An iteration that does not settle throws with its figures (422 over the API), never returns the last iterate.
+    [Fact]
+    public void Analysis_IterationCapReached_ThrowsWithFigures()
+    {
+        var options = new AnalysisOptions { Unconfined = new() { MaxIterations = 3 } };
+        var ex = Assert.Throws<Seepage.Core.Solvers.SolverNotConvergedException>(
+            () => Seepage.Core.Analysis.Run(Valid(Dams.Trapezoid(false)), options));
+        Assert.Equal(3, ex.Iterations);
+        Assert.Contains("head change", ex.Message);
+    }
+
+    // A layered embankment with a clay core on a pervious anisotropic foundation, a drain on the interface between the
+    // shell and the foundation (an internal drain) and two seepage faces converges with the default settings.
+    [Fact]
+    public void Analysis_ZonedLeveeExample_ConvergesWithDefaults()
+    {
+        var doc = Seepage.Core.Sections.SectionParser.Parse(File.ReadAllText(
+            Path.Combine(AppContext.BaseDirectory, "examples", "levee-pervious-foundation.section.json")), out _)!;
+        var r = Seepage.Core.Analysis.Run(Valid(doc));
+        output.WriteLine($"q {r.Flow.PerMetre:E5}, iterations {r.Unconfined!.Iterations}, balance {r.Flow.Balance:E2}");
+        Assert.True(Math.Abs(r.Flow.Balance) < 1e-6);
+        Assert.True(r.Flow.Boundaries.Single(b => b.Kind == "drain").Flow < 0, "the internal drain takes water");
+        Assert.NotEmpty(r.PhreaticSurface);
+    }
 }

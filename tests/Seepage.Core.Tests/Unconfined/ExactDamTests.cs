@@ -74,7 +74,7 @@ public class ExactDamTests(ITestOutputHelper output)
         Assert.True(Math.Abs(unconfined.Flow.PerMetre / confined.Flow.PerMetre - 1) < 1e-6,
             $"{unconfined.Flow.PerMetre:E8} against {confined.Flow.PerMetre:E8}");
         Assert.All(unconfined.Field.ElementFactors!, f => Assert.Equal(1, f));
-        // One solve, then the inexact-solve schedule tightens 1e-6 → 1e-9 → 1e-10 while nothing moves.
-        Assert.True(unconfined.Unconfined!.Iterations <= 6, $"{unconfined.Unconfined.Iterations} iterations");
+        // Nothing switches and k_r stays 1: only the inexact-solve schedule (1e-6 down to 1e-10) takes a few iterations.
+        Assert.True(unconfined.Unconfined!.Iterations <= 10, $"{unconfined.Unconfined.Iterations} iterations");
     }
 }
