@@ -40,6 +40,7 @@ public static class AnalysisReportBuilder
             blocks.Add(new ReportFigure("Upward exit gradient along the exit surface with the allowable gradient (critical gradient / required factor).", exitFigure));
         blocks.Add(new ReportTable(ChecksCaption, ChecksHeaders, [.. Checks(r), .. AnalysisReportExtras.CheckRows(r)]));
         blocks.AddRange(AnalysisReportExtras.Blocks(r));
+        blocks.AddRange(UnconfinedMemo.Blocks(r));
         if (r.Warnings.Count > 0) { blocks.Add(new ReportHeading("Warnings")); blocks.Add(new ReportList(r.Warnings)); }
         blocks.Add(new ReportHeading("3. Methods and sources"));
         blocks.Add(new ReportList(Methods(r, section)));

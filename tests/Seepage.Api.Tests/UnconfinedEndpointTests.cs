@@ -34,6 +34,19 @@ public class UnconfinedEndpointTests
         Assert.Contains(field.GetProperty("relativeConductivity").EnumerateArray(), v => v.GetDouble() < 0.5);
     }
 
+    // The memo shows the phreatic surface, what leaves through each drain and seepage face, and the hand methods.
+    [Fact]
+    public async Task Report_Embankment_ShowsPhreaticSurfaceFlowsAndHandMethods()
+    {
+        using var factory = new SeepageFactory();
+        var client = factory.CreateClient();
+        var post = await client.PostAsync("/api/v1/analyses", Json(await client.GetStringAsync("/api/v1/examples/embankment-toe-drain")));
+        string id = JsonDocument.Parse(await post.Content.ReadAsStringAsync()).RootElement.GetProperty("id").GetString()!;
+        string html = await client.GetStringAsync($"/api/v1/analyses/{id}/report");
+        foreach (string text in new[] { "phreatic surface", "Water leaving the soil", "toe drain", "Hand methods beside the FE", "Kozeny 1931" })
+            Assert.Contains(text, html);
+    }
+
     // A seepage face in a confined section is refused with its pointer (no silent meaning given to it).
     [Fact]
     public async Task Validate_SeepageFaceWithoutUnconfined_400()
