@@ -14,17 +14,21 @@ namespace Seepage.Benchmarks;
 /// and, as the anchor on the same mesh, one confined solve of the same section (<see cref="FieldSolver"/>). Prints
 /// one line per size: <c>unconfined triangles=N seconds=S iterations=I confinedSeconds=C</c> (medians of
 /// <c>--runs</c>, default 3; meshing is not timed). Options: <c>--triangles a,b</c> (default: the example's own mesh
-/// and 200000; 0 means the example's own mesh).
+/// and 200000; 0 means the example's own mesh), <c>--max-iterations k</c> (default the library's). An iteration that does
+/// not converge prints <c>seconds=nan</c> with the iterations reached, and its message on stderr.
 /// </summary>
 public static class UnconfinedBenchmark
 {
     public static void Run(string[] args)
     {
         int runs = 3;
+        var uopt = new UnconfinedOptions();
         double[] targets = [0, 200_000];
         for (int i = 0; i + 1 < args.Length; i++)
         {
             if (args[i] == "--runs") runs = int.Parse(args[i + 1], CultureInfo.InvariantCulture);
+            if (args[i] == "--max-iterations")
+                uopt = uopt with { MaxIterations = int.Parse(args[i + 1], CultureInfo.InvariantCulture) };
             if (args[i] == "--triangles") targets = args[i + 1].Split(',').Select(s => double.Parse(s, CultureInfo.InvariantCulture)).ToArray();
         }
         string path = Path.Combine(AppContext.BaseDirectory, "embankment-toe-drain.section.json");
@@ -32,12 +36,18 @@ public static class UnconfinedBenchmark
         var section = SectionValidator.Validate(doc).Model!;
         var confinedSection = section with { Unconfined = false };
         var solver = new SolverOptions();
-        var uopt = new UnconfinedOptions();
         foreach (double target in targets)
         {
             var sized = target <= 0 ? section : section with { Mesh = section.Mesh with { Size = SizeFor(section, target) } };
             var mesh = Analysis.MakeMesh(sized, []);
-            UnconfinedSolver.Solve(sized, mesh, uopt, solver); // warm-up (JIT) at this size
+            try { UnconfinedSolver.Solve(sized, mesh, uopt, solver); } // warm-up (JIT) at this size
+            catch (SolverNotConvergedException ex)
+            {
+                Console.Error.WriteLine(ex.Message);
+                Console.WriteLine(FormattableString.Invariant(
+                    $"unconfined triangles={mesh.TriangleCount} seconds=nan iterations={ex.Iterations} confinedSeconds=nan"));
+                continue;
+            }
             var free = new List<double>(); var confined = new List<double>();
             int iterations = 0;
             for (int r = 0; r < runs; r++)
