@@ -15,8 +15,9 @@ public sealed record UnconfinedOptions
     /// seepage-face switch is settled. Default 1e-7.</summary>
     public double Tolerance { get; init; } = 1e-7;
 
-    /// <summary>Iteration cap; the iteration throws with its figures when it is reached. Default 300.</summary>
-    public int MaxIterations { get; init; } = 300;
+    /// <summary>Iteration cap; the iteration throws with its figures when it is reached. Default 1000 (the embankment
+    /// example needs about 70 at its default mesh of 4,000 triangles and 566 at 362,000).</summary>
+    public int MaxIterations { get; init; } = 1000;
 
     /// <summary>Smallest damping factor ω of the update h ← h + ω (h* − h). Default 0.05: on fine meshes the undamped
     /// map is not a contraction and a floor of 0.2 left a 200k-triangle embankment in a limit cycle.</summary>
