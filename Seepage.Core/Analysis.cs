@@ -21,9 +21,19 @@ public static class Analysis
         var clock = Stopwatch.StartNew();
         var warnings = new List<string>(section.Warnings);
 
+        var stage = options.StageDone ?? (_ => { });
         var mesh = MakeMesh(section, warnings, cancellation);
+        stage("mesh");
         var free = section.Unconfined ? UnconfinedSolver.Solve(section, mesh, options.Unconfined, options.Solver, cancellation) : null;
-        var solution = free?.Solution ?? FieldSolver.Solve(section, mesh, section.Mesh.Order, options.Solver, cancellation);
+        FieldSolution solution;
+        if (free is not null) solution = free.Solution;
+        else
+        {
+            var problem = FieldSolver.Assemble(section, mesh, section.Mesh.Order);
+            stage("assembly");
+            solution = FieldSolver.Solve(problem, mesh, options.Solver, cancellation);
+        }
+        stage("solve");
         var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
         double tolerance = 1e-6 * section.Extent;
 
@@ -36,14 +46,16 @@ public static class Analysis
         var creep = CreepCalculator.Compute(section, exitSoil);
         var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
         var gauges = GaugeCalculator.Compute(section, sampler, reactions, fixedHeads.IsFixed);
+        stage("figures");
         var convergence = section.Mesh.ConvergenceCheck && !Skipped(free, "mesh.convergenceCheck", warnings)
             ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
-        bool runTruncation = free is null
-            ? section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles
-            : section.TruncationCheck == true && !Skipped(free, "truncationCheck", warnings);
-        var truncation = runTruncation
-            ? TruncationCheck.Run(section, flow.PerMetre, section.Mesh.Order, s => MakeMesh(s, [], cancellation), options.Solver, warnings, cancellation)
-            : null;
+        stage("convergence");
+        // The first-order estimate costs nothing and always runs unless the section turns the check off; the wider
+        // solve follows where needed when asked for, or automatically for small models.
+        var truncation = section.TruncationCheck == false || Skipped(free, "truncationCheck", warnings) ? null
+            : TruncationCheck.Run(section, solution, flow.PerMetre, s => MakeMesh(s, [], cancellation), options.Solver,
+                section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles, warnings, cancellation);
+        stage("truncation");
 
         FlowNet? net = null;
         if (options.FlowNet)
@@ -52,14 +64,22 @@ public static class Analysis
             var psi = section.Drains.Any(d => d.Internal)
                 ? NoFlowLines(warnings)
                 : StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
+            stage("streamFunction");
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
-            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, ConductivityTensor.Of(exitSoil).Mean, options.HeadDrops,
-                field.ElementFactors?.Select(f => f >= 0.5).ToArray());
+            var reference = ConductivityTensor.Of(exitSoil);
+            net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, reference.Mean,
+                options.HeadDrops ?? section.FlowNetHeadDrops, field.ElementFactors?.Select(f => f >= 0.5).ToArray()) with
+            {
+                ReferenceSoil = exitSoil.Id,
+                UniformIsotropic = exitSoil.Kx == exitSoil.Ky
+                    && section.Zones.All(z => section.Soils[z.Soil] is var s && s.Kx == exitSoil.Kx && s.Ky == exitSoil.Ky),
+            };
+            stage("flowNet");
         }
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
-        return new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
+        var result = new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
             clock.Elapsed.TotalSeconds)
         {
             IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation,
@@ -68,6 +88,8 @@ public static class Analysis
             SeepageFaces = free is null ? [] : SeepageFaceCalculator.Compute(section, boundary, fixedHeads, free.FaceNodes, reactions, tolerance),
             HandMethods = free is null ? null : EmbankmentHandMethods.For(section, flow.PerMetre),
         };
+        FiniteResultGuard.Check(result);
+        return result;
     }
 
     // The re-analyses on other meshes solve the confined problem; for an unconfined section they are not run (and

@@ -14,6 +14,11 @@ public sealed record AnalysisOptions
     /// <summary>Settings of the free-surface iteration of unconfined sections.</summary>
     public Unconfined.UnconfinedOptions Unconfined { get; init; } = new();
 
-    /// <summary>Number of equal head drops of the flow net. Default 12.</summary>
-    public int HeadDrops { get; init; } = Results.FlowNetBuilder.DefaultHeadDrops;
+    /// <summary>Number of equal head drops of the flow net; wins over the section's <c>flowNet.headDrops</c>.
+    /// Default null: the section's value, or chosen for square cells (<see cref="Results.FlowNetBuilder.ChooseHeadDrops"/>).</summary>
+    public int? HeadDrops { get; init; }
+
+    /// <summary>Called on the analysing thread after each stage with its name (mesh, assembly, solve, figures,
+    /// convergence, truncation, streamFunction, flowNet), e.g. for a benchmark to read a clock. Default none.</summary>
+    public Action<string>? StageDone { get; init; }
 }

@@ -84,6 +84,7 @@ public sealed record ConvergenceDto(int[] Triangles, IReadOnlyList<ConvergenceFi
 public sealed record ConvergenceFigureDto(string Name, string Unit, double[] Values, double? ObservedOrder, double? Extrapolated, double EstimatedError);
 
 /// <summary>Truncation check: lateral boundaries (x, m) before and after pushing them out, the flows (m³/s per m)
-/// and the relative change.</summary>
+/// and the relative change; <c>method</c> says how: <c>sensitivity</c> (first-order estimate from the one solution, an
+/// upper bound; extendedFlow = flow × (1 + change)) or <c>widerSolve</c> (the wider section meshed and solved).</summary>
 public sealed record TruncationDto(double LeftX, double RightX, double ExtendedLeftX, double ExtendedRightX, double Flow,
-    double ExtendedFlow, double Change);
+    double ExtendedFlow, double Change, string Method);

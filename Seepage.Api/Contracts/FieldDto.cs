@@ -31,5 +31,12 @@ public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Pat
 /// between it and the first flow line.</summary>
 public sealed record FlowLineDto(double Fraction, double[][] Points);
 
-/// <summary>Flow-net counts: Nf flow channels, Nd head drops, shape factor Nf/Nd, so q ≈ k·H·Nf/Nd.</summary>
-public sealed record FlowNetDto(int FlowChannels, int HeadDrops, double ShapeFactor, double HeadDifference);
+/// <summary>Flow-net counts: <c>flowChannels</c> whole channels drawn (the last may be a part channel),
+/// <c>flowChannelsExact</c> Nf with its fraction, Nd head drops (<c>headDropsSource</c>: "automatic" for square
+/// cells and at least four channels, or "section" from <c>flowNet.headDrops</c>), shape factor
+/// q/(k·H) = Nf/Nd with k = <c>referenceConductivity</c> = √(kx·ky) of <c>referenceSoil</c> (m/s), H the head
+/// difference (m). <c>uniformIsotropic</c> false means q = k·H·Nf/Nd holds only approximately for the drawn net
+/// (layered or anisotropic section). <c>caption</c> says all this in words (the page and the memo show it).</summary>
+public sealed record FlowNetDto(int FlowChannels, int HeadDrops, double ShapeFactor, double HeadDifference,
+    double FlowChannelsExact = 0, string? HeadDropsSource = null, double ReferenceConductivity = 0,
+    string? ReferenceSoil = null, bool UniformIsotropic = false, string? Caption = null);

@@ -34,7 +34,8 @@ public static class ResultMapper
             r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length, g.Method, g.LineIntegral)).ToList(),
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
-            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null,
+            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change,
+                tr.Method) : null,
             r.PhreaticSurface.Select(l => new PhreaticLineDto(Line(l.Points))).ToList(),
             r.SeepageFaces.Select(x => new SeepageFaceDto(x.Name, x.Flow, Pair(x.ExitPoint), x.WettedLength)).ToList(),
             r.Unconfined is { } u ? new UnconfinedDto(u.Iterations, u.Method, u.Change, u.Band, u.Floor, u.LinearIterations, u.Seconds) : null,
@@ -62,7 +63,10 @@ public static class ResultMapper
         var net = r.FlowNet;
         var equipotentials = net?.Equipotentials.Select(e => new EquipotentialDto(e.Head, e.Paths.Select(Line).ToList())).ToList() ?? [];
         var flowLines = net?.FlowLines.SelectMany(l => l.Paths.Select(p => new FlowLineDto(l.Fraction, Line(p)))).ToList() ?? [];
-        var counts = new FlowNetDto(net?.FlowChannels ?? 0, net?.HeadDrops ?? 0, net?.ShapeFactor ?? 0, net?.HeadDifference ?? 0);
+        var counts = net is null ? new FlowNetDto(0, 0, 0, 0)
+            : new FlowNetDto(net.FlowChannels, net.HeadDrops, net.ShapeFactor, net.HeadDifference, net.FlowChannelsExact,
+                net.HeadDropsSource, net.ReferenceConductivity, net.ReferenceSoil, net.UniformIsotropic);
+        counts = counts with { Caption = Reports.FlowNetCaption.Of(counts) };
         var walls = r.Section.Cutoffs.Select(c => Line([c.Top, c.Tip]))
             .Concat(r.Section.Structures.Select(s => Line(s.Base))).ToList();
         var gradients = new double[m.TriangleCount][];

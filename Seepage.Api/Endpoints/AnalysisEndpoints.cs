@@ -2,6 +2,7 @@ using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 using Seepage.Core.Meshing;
+using Seepage.Core.Results;
 using Seepage.Core.Sections;
 using Seepage.Core.Solvers;
 
@@ -61,11 +62,11 @@ public static class AnalysisEndpoints
         }
         catch (SolverNotConvergedException ex)
         {
-            return TypedResults.Problem(statusCode: StatusCodes.Status422UnprocessableEntity, title: "The linear solve did not converge.",
-                detail: ex.Message, extensions: new Dictionary<string, object?>
-                {
-                    ["iterations"] = ex.Iterations, ["residual"] = ex.Residual, ["tolerance"] = ex.Tolerance,
-                });
+            return AnalysisProblems.NotConverged(ex);
+        }
+        catch (NonFiniteResultException ex)
+        {
+            return AnalysisProblems.NonFinite(ex);
         }
     }
 

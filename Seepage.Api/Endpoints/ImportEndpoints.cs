@@ -39,7 +39,8 @@ public static class ImportEndpoints
     {
         var body = await SpreadsheetBody.ReadAsync(request, cancellation);
         if (body.Import is not { } import)
-            return TypedResults.Problem(statusCode: body.Status, title: "The spreadsheet could not be taken.", detail: body.Error);
+            return TypedResults.Problem(statusCode: body.Status, title: "The spreadsheet could not be taken.", detail: body.Error,
+                extensions: new Dictionary<string, object?> { ["errors"] = new Dictionary<string, string[]> { ["body"] = [body.Error ?? ""] } });
         if (import.Document is null) return Invalid(import.Problems, "The spreadsheet has cells that could not be read.");
         var outcome = SectionValidator.Validate(import.Document);
         if (!outcome.IsValid) return Invalid(import.Place(outcome.Problems), "The section in the spreadsheet has problems.");

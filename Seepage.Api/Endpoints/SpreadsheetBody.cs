@@ -19,7 +19,14 @@ public static class SpreadsheetBody
         Stream source = request.Body;
         if (request.HasFormContentType)
         {
-            var form = await request.ReadFormAsync(cancellation);
+            IFormCollection form;
+            try { form = await request.ReadFormAsync(cancellation); }
+            catch (Exception ex) when (ex is InvalidDataException or IOException)
+            {
+                // A malformed or truncated multipart body (missing boundary, cut-off part, a part over the form limits).
+                return ex.Message.Contains("limit", StringComparison.OrdinalIgnoreCase) ? TooLarge()
+                    : Bad(StatusCodes.Status400BadRequest, "The multipart form could not be read: " + ex.Message);
+            }
             var file = form.Files.FirstOrDefault();
             if (file is null) return Bad(StatusCodes.Status400BadRequest, "The form holds no file; attach the spreadsheet (.csv or .xlsx) as a file field.");
             if (file.Length > SectionBody.MaxBytes) return TooLarge();

@@ -37,8 +37,16 @@ public static class StudyBody
             return Finish(baseSection, alternatives, errors);
         }
         JsonNode? root;
-        try { root = JsonNode.Parse(body, documentOptions: new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true }); }
-        catch (JsonException ex) { errors[""] = ["Malformed JSON: " + ex.Message]; return new Outcome(null, [], errors, false); }
+        var options = new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true, AllowDuplicateProperties = false };
+        try { root = JsonNode.Parse(body, documentOptions: options); }
+        catch (JsonException ex)
+        {
+            // A member given twice (which one would win?) or broken syntax, keyed by where the reader stopped.
+            string? twice = DuplicateMemberFinder.Find(body);
+            errors[twice ?? SectionParser.ToPointer(ex.Path)] = [twice is null ? "Malformed JSON: " + ex.Message
+                : "is given twice in its object; give each member once (which one should count?)."];
+            return new Outcome(null, [], errors, false);
+        }
         if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors, false); }
         JsonObject? section = obj["base"] is JsonObject b ? CheckBase(b.ToJsonString(), "/base", errors) : null;
         if (obj["base"] is not JsonObject) errors["/base"] = ["must be the base section document (a JSON object)."];

@@ -32,8 +32,8 @@ public static class AnalysisReportBuilder
                     Point(c.Top), Point(c.Tip)))).ToList()),
             new ReportFigure("Section geometry: soil zones, structures and cutoffs, head boundaries.", AnalysisFigures.Geometry(section)),
             new ReportHeading("2. Results"),
-            new ReportFigure($"Flow net: {field.FlowNet.HeadDrops} equal head drops and {field.FlowNet.FlowChannels} flow channels " +
-                $"(shape factor Nf/Nd = {N(field.FlowNet.ShapeFactor)}), drawn from the finite element head field.", AnalysisFigures.FlowNet(section, field)),
+            new ReportFigure((field.FlowNet.Caption ?? FlowNetCaption.Of(field.FlowNet)) + " Drawn from the finite element head field.",
+                AnalysisFigures.FlowNet(section, field)),
             new ReportFigure("Uplift pressure under the structures (pore pressure u = γw (h − y)).", AnalysisFigures.Uplift(r)),
         };
         if (AnalysisFigures.ExitProfile(r) is { } exitFigure)

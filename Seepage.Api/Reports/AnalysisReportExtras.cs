@@ -41,6 +41,9 @@ public static class AnalysisReportExtras
                 [$"{N(t.LeftX)} … {N(t.RightX)}", N(t.Flow)],
                 [$"{N(t.ExtendedLeftX)} … {N(t.ExtendedRightX)} (pushed out)", N(t.ExtendedFlow)],
                 ["relative change", N(t.Change)],
+                // Results stored before the method was recorded were all wider solves.
+                ["method", t.Method == "sensitivity" ? "first-order estimate from the one solution (an upper bound)"
+                    : "the wider section meshed and solved"],
             ]);
     }
 

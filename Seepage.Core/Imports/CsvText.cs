@@ -3,8 +3,8 @@ using System.Text;
 namespace Seepage.Core.Imports;
 
 /// <summary>Reads and writes comma-separated text (RFC 4180: fields holding a comma, a quote or a line break are
-/// quoted, a quote inside is doubled). When the first line holding either holds semicolons and no commas the text is read as
-/// semicolon-separated (as spreadsheets set to a decimal-comma locale save it).</summary>
+/// quoted, a quote inside is doubled). Text whose first non-comment line holding a separator has semicolons (and no commas
+/// other than decimal commas) is read as semicolon-separated, as spreadsheets set to a decimal-comma locale save it.</summary>
 public static class CsvText
 {
     /// <summary>Splits <paramref name="text"/> into a grid named <paramref name="sheet"/>; every cell is a string or null.</summary>
@@ -77,14 +77,27 @@ public static class CsvText
         return s.Length == 0 && !quoted ? null : s;
     }
 
-    // The first line holding a comma or a semicolon decides (block-name rows hold neither).
+    // The separator is decided by the block and column-name rows, never by comment rows (first cell starting with '#'),
+    // whose prose may hold commas. The first other line holding a comma or a semicolon decides: semicolons with no comma,
+    // or with commas only between digits (decimal commas, as in "2,5;3,0"), mean ';'. Block-name rows hold neither.
     private static char DetectDelimiter(string text)
     {
-        foreach (string line in text.Split('\n'))
+        foreach (string raw in text.Split('\n'))
         {
+            string line = raw.TrimStart().TrimStart('"').TrimStart();
+            if (line.StartsWith('#')) continue;
             bool comma = line.Contains(','), semicolon = line.Contains(';');
-            if (comma || semicolon) return !comma && semicolon ? ';' : ',';
+            if (!comma && !semicolon) continue;
+            return semicolon && (!comma || OnlyDecimalCommas(line)) ? ';' : ',';
         }
         return ',';
+    }
+
+    private static bool OnlyDecimalCommas(string line)
+    {
+        for (int i = 0; i < line.Length; i++)
+            if (line[i] == ',' && (i == 0 || i + 1 >= line.Length || !char.IsAsciiDigit(line[i - 1]) || !char.IsAsciiDigit(line[i + 1])))
+                return false;
+        return true;
     }
 }

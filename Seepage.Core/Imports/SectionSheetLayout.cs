@@ -2,7 +2,7 @@ namespace Seepage.Core.Imports;
 
 /// <summary>
 /// Our spreadsheet layout of a section document: blocks, each opened by a row holding only the block's name in
-/// column A, then a row of column names (any order; text in parentheses, such as a unit, is ignored), then one
+/// column A, then a row of column names (any order; a unit in parentheses is honoured or refused, see HeaderUnits), then one
 /// row per item or per vertex. Blank rows and rows whose first cell starts with '#' are skipped anywhere. In a
 /// workbook a sheet named after a block may leave out the block-name row; sheets named "notes" or starting with
 /// '#' are ignored. The README section "Sections from a spreadsheet" documents the blocks.
@@ -30,7 +30,8 @@ public static class SectionSheetLayout
     /// <summary>The columns of each block (canonical names, as in the JSON contract where one exists).</summary>
     public static readonly IReadOnlyDictionary<string, string[]> Columns = new Dictionary<string, string[]>
     {
-        [Section] = ["title", "description", "conductivityUnit", "waterUnitWeight", "structureLength", "truncationCheck", "unconfined"],
+        [Section] = ["title", "description", "conductivityUnit", "lengthUnit", "unitWeightUnit", "waterUnitWeight", "structureLength",
+            "truncationCheck", "unconfined"],
         [Soils] = ["id", "kx", "ky", "beddingAngle", "specificGravity", "voidRatio", "saturatedUnitWeight", "creepClass"],
         [Zones] = ["zone", "soil", "x", "y", "size"],
         [Structures] = ["name", "x", "y"],

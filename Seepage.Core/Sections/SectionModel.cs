@@ -45,6 +45,9 @@ public sealed record SectionModel(
     /// <summary>Potential seepage faces: boundary polylines (m) where water may leave at h = y.</summary>
     public IReadOnlyList<SeepageFace> SeepageFaces { get; init; } = [];
 
+    /// <summary>Head drops Nd of the flow net from <c>flowNet.headDrops</c>; null chooses Nd for square cells.</summary>
+    public int? FlowNetHeadDrops { get; init; }
+
     /// <summary>Geometric tolerance, metres: 1e-7 of the extent.</summary>
     public double Tolerance => 1e-7 * Extent;
 }

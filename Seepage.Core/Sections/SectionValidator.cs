@@ -20,14 +20,11 @@ public static class SectionValidator
         var warnings = new List<string>();
         var reader = new PointReader(problems);
 
-        if (doc.Extra is { Count: > 0 })
-            foreach (var key in doc.Extra.Keys)
-                warnings.Add($"Unknown member '{key}' at the top level was ignored.");
-
-        double unitFactor = 1;
-        string unit = doc.ConductivityUnit ?? "m/s";
-        if (!ConductivityUnits.ToMetresPerSecond.TryGetValue(unit, out unitFactor))
-            problems.Add(new("/conductivityUnit", $"'{unit}' is not a known unit; use one of {string.Join(", ", ConductivityUnits.ToMetresPerSecond.Keys)}."));
+        doc = SectionUnits.ToSi(doc, problems);
+        // An unknown unit is one problem: NaN keeps the conductivity range checks from adding follow-on ones.
+        string? unit = SectionEnumerations.Read(doc.ConductivityUnit, "m/s", SectionEnumerations.ConductivityUnits,
+            "/conductivityUnit", problems);
+        double unitFactor = unit is null ? double.NaN : ConductivityUnits.ToMetresPerSecond[unit];
 
         double gammaW = doc.WaterUnitWeight ?? 9.81;
         if (!double.IsFinite(gammaW) || gammaW < 5 || gammaW > 15)
@@ -68,6 +65,7 @@ public static class SectionValidator
         bool unconfined = doc.Unconfined ?? false;
         if (!unconfined && doc.SeepageFaces is { Count: > 0 })
             problems.Add(new("/seepageFaces", "needs \"unconfined\": true; a confined section has no seepage face (use a drain)."));
+        BoundaryConflictCheck.Check(doc, tolerance * 10, problems);
         var walls = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
         var cutoffs = walls.Cutoffs;
 
@@ -86,9 +84,10 @@ public static class SectionValidator
             problems.Add(new("/mesh/order", "an unconfined section is solved with linear triangles (order 1) only."));
 
         var gauges = ReadGauges(doc.Gauges, reader, problems);
+        int? headDrops = FlowNetReader.HeadDrops(doc.FlowNet, problems);
 
-        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
-            problems.Add(new("/structureLength", "must be a positive length in metres."));
+        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0 || len > PointReader.LargestCoordinate))
+            problems.Add(new("/structureLength", "must be a positive length in metres, at most 1,000,000 m."));
 
         if (problems.Count > 0 || zones is null || exit is null || mesh is null)
             return new ValidationOutcome(null, problems);
@@ -100,7 +99,11 @@ public static class SectionValidator
         }
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces };
+            exit, heaveFactor, mesh, doc.StructureLength, warnings)
+        {
+            Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces,
+            FlowNetHeadDrops = headDrops,
+        };
         return new ValidationOutcome(model, problems);
     }
 
@@ -127,8 +130,10 @@ public static class SectionValidator
             if (s.SpecificGravity is { } gs && (!double.IsFinite(gs) || gs <= 1 || gs > 5)) problems.Add(new($"{at}/specificGravity", "must lie between 1 and 5."));
             if (s.VoidRatio is { } e && (!double.IsFinite(e) || e <= 0 || e > 10)) problems.Add(new($"{at}/voidRatio", "must lie between 0 and 10."));
             if (s.SaturatedUnitWeight is { } gsat && (!double.IsFinite(gsat) || gsat <= 0)) problems.Add(new($"{at}/saturatedUnitWeight", "must be a positive unit weight in kN/m³."));
+            string? creepClass = s.CreepClass is null ? null
+                : SectionEnumerations.Read(s.CreepClass, "", SectionEnumerations.CreepClasses, $"{at}/creepClass", problems);
             soils.Add(new Soil(s.Id ?? $"soil {i}", kx * unitFactor, ky * unitFactor, angle, s.SpecificGravity, s.VoidRatio,
-                s.SaturatedUnitWeight, s.CreepClass));
+                s.SaturatedUnitWeight, creepClass));
         }
         return soils;
     }

@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using System.Text.Json.Nodes;
 using Seepage.Core.Meshing;
+using Seepage.Core.Results;
 using Seepage.Core.Sections;
 using Seepage.Core.Solvers;
 
@@ -58,6 +59,10 @@ public static class StudyRunner
         catch (SolverNotConvergedException ex)
         {
             return (Failed(index, alternative.Name, [new SectionProblem("", "The linear solve did not converge: " + ex.Message)], clock, json), null);
+        }
+        catch (NonFiniteResultException ex)
+        {
+            return (Failed(index, alternative.Name, [new SectionProblem("", ex.Message)], clock, json), null);
         }
     }
 

@@ -1,4 +1,5 @@
-// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mesh|solve|unconfined> [options]`.
+// Benchmark harness: `dotnet run -c Release --project tests/Seepage.Benchmarks -- <mode> [options]`; the modes are listed
+// in the switch below and in the usage line.
 // Each mode prints one fixed-format line per size (see MeshBenchmark and SolveBenchmark).
 using Seepage.Benchmarks;
 
@@ -8,8 +9,12 @@ switch (mode)
 {
     case "mesh": MeshBenchmark.Run(rest); return 0;
     case "solve": SolveBenchmark.Run(rest); return 0;
+    case "stages": StageBenchmark.Run(rest); return 0;
+    case "service": ServiceBenchmark.Run(rest); return 0;
+    case "coldstart": ColdStartBenchmark.Run(rest); return 0;
+    case "uncertainty": UncertaintyBenchmark.Run(rest); return 0;
     case "unconfined": UnconfinedBenchmark.Run(rest); return 0;
     default:
-        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|unconfined> [options]");
+        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|uncertainty|unconfined> [options]");
         return 1;
 }

@@ -1,0 +1,39 @@
+namespace Seepage.Core.Uncertainty;
+
+/// <summary>
+/// The statistics of an uncertainty study over the samples finished so far: each figure's <see cref="FigureStatistics"/>,
+/// the probability of failure of the piping (<c>exit</c>) and <c>heave</c> checks, the rank correlation (Spearman) of each
+/// variable with each figure as the sensitivity, and how many samples could not be analysed, with the first reasons.
+/// </summary>
+public sealed record UncertaintySummary(int Analysed, int Failed, IReadOnlyDictionary<string, FigureStatistics> Figures,
+    IReadOnlyDictionary<string, CheckProbability> Checks, IReadOnlyDictionary<string, IReadOnlyDictionary<string, double>> Sensitivity,
+    IReadOnlyList<string> FailureReasons)
+{
+    /// <summary>Most distinct reasons kept for samples that could not be analysed.</summary>
+    public const int MaxReasons = 5;
+
+    public static UncertaintySummary Of(UncertaintyStudy study, IReadOnlyList<SampleOutcome> outcomes)
+    {
+        var good = outcomes.Where(o => o.Figures is not null).ToList();
+        var figures = new Dictionary<string, FigureStatistics>();
+        var sensitivity = study.Variables.Select(v => v.Member).Distinct()
+            .ToDictionary(m => m, _ => (IReadOnlyDictionary<string, double>)new Dictionary<string, double>());
+        foreach (string name in SampleFigures.Names)
+        {
+            var with = good.Where(o => o.Figures!.Get(name) is not null).ToList();
+            if (with.Count == 0) continue;
+            var values = with.Select(o => o.Figures!.Get(name)!.Value).ToList();
+            figures[name] = FigureStatistics.Of(values);
+            for (int j = 0; j < study.Variables.Count; j++)
+                ((Dictionary<string, double>)sensitivity[study.Variables[j].Member])[name] =
+                    with.Count > 2 ? Spearman.Rho(with.Select(o => o.Values[j]).ToList(), values) : double.NaN;
+        }
+        var checks = new Dictionary<string, CheckProbability>();
+        var exit = good.Where(o => o.Figures!.ExitFails is not null).ToList();
+        if (exit.Count > 0) checks["exit"] = CheckProbability.Of(exit.Count(o => o.Figures!.ExitFails == true), exit.Count, exit[0].Figures!.ExitRequiredFactor);
+        var heave = good.Where(o => o.Figures!.HeaveFails is not null).ToList();
+        if (heave.Count > 0) checks["heave"] = CheckProbability.Of(heave.Count(o => o.Figures!.HeaveFails == true), heave.Count, heave[0].Figures!.HeaveRequiredFactor);
+        var reasons = outcomes.Where(o => o.Problem is not null).Select(o => o.Problem!).Distinct().Take(MaxReasons).ToList();
+        return new UncertaintySummary(good.Count, outcomes.Count - good.Count, figures, checks, sensitivity, reasons);
+    }
+}
