@@ -15,6 +15,8 @@ app.MapSectionEndpoints();
 app.MapExampleEndpoints();
 app.MapImportEndpoints();
 app.MapStudyEndpoints();
+app.MapTargetSearchEndpoints();
+app.MapUncertaintyEndpoints();
 app.MapReportEndpoints();
 app.MapSystemExportEndpoints();
 app.LogPageAddress();

@@ -17,6 +17,10 @@ public static class ServiceSetup
         services.AddSingleton<AnalysisService>();
         services.AddSingleton(new StudyStore(path));
         services.AddSingleton<StudyService>();
+        services.AddSingleton(new DesignRunStore(path));
+        services.AddSingleton<RunningJobs>();
+        services.AddSingleton<TargetSearchService>();
+        services.AddSingleton<UncertaintyService>();
         services.AddSingleton<ExampleCatalog>();
         services.AddProblemDetails();
         services.ConfigureHttpJsonOptions(o => o.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);

@@ -76,7 +76,7 @@ public static class StudyBody
     }
 
     // The base must be a valid section by itself; its problems are keyed under the base's pointer.
-    private static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
+    internal static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
     {
         var document = SectionParser.Parse(json, out var parseProblems);
         var problems = document is null ? parseProblems : SectionValidator.Validate(document).Problems;
@@ -84,7 +84,7 @@ public static class StudyBody
         return problems.Count == 0 ? JsonNode.Parse(json) as JsonObject : null;
     }
 
-    private static async Task<string?> ReadTextAsync(HttpRequest request, CancellationToken cancellation)
+    internal static async Task<string?> ReadTextAsync(HttpRequest request, CancellationToken cancellation)
     {
         if (request.ContentLength > SectionBody.MaxBytes) return null;
         using var buffer = new MemoryStream();

@@ -12,9 +12,6 @@ namespace Seepage.Core.Sections;
 /// </summary>
 public sealed record SizeEstimate(long Triangles, long Unknowns, int Order, bool ConvergenceCheck, long LargestSolveUnknowns)
 {
-    /// <summary>Unknowns of the largest solve above which the page warns that the run will take a while.</summary>
-    public const long LargeSolve = 1_000_000;
-
     /// <summary>How many times the unknowns of a plain linear (order 1) solve the largest solve has.</summary>
     public double Multiplier => (double)LargestSolveUnknowns / (Triangles / 2 + 1);
 

@@ -7,12 +7,14 @@ namespace Seepage.Core.TargetSearch;
 /// analysed like a study alternative (<see cref="StudyRunner.RunOne"/>), and its margins against the requirements.</summary>
 public static class TargetEvaluator
 {
-    public static (TargetPoint Point, AnalysisResult? Result) Evaluate(JsonNode baseSection, TargetSearch search, double value,
+    /// <summary>The base is given as JSON text and parsed per point, since the scan evaluates points on several threads and
+    /// a parsed JsonNode is not safe to read concurrently.</summary>
+    public static (TargetPoint Point, AnalysisResult? Result) Evaluate(string baseSection, TargetSearch search, double value,
         AnalysisOptions? options, CancellationToken cancellation)
     {
         var alternative = new StudyAlternative(FormattableString.Invariant($"{search.Member} = {value:G6}"),
             [new(search.Member, JsonValue.Create(value))]);
-        var (row, result) = StudyRunner.RunOne(baseSection, 0, alternative, options, cancellation);
+        var (row, result) = StudyRunner.RunOne(JsonNode.Parse(baseSection)!, 0, alternative, options, cancellation);
         return (new TargetPoint(value, row, search.Require.Margins(row)), result);
     }
 }

@@ -25,6 +25,25 @@ public static class TargetSearcher
         points.AddRange(scan);
 
         var notes = new List<string>();
+        var active = search.Require;
+        foreach (string name in search.Require.Active)
+        {
+            var analysed = scan.Where(p => p.Row.Analysed).ToList();
+            if (analysed.Count == 0 || analysed.Any(p => p.Margins[name] is not null)) continue;
+            notes.Add($"{name} could not be checked: {Missing(name)}" +
+                (search.RequirementsDefaulted ? " It was a default requirement and is left out." : " No point can meet it."));
+            if (search.RequirementsDefaulted) active = Without(active, name);
+        }
+        if (!ReferenceEquals(active, search.Require))
+        {
+            var reduced = active;
+            var inner = evaluate;
+            evaluate = v => { var p = inner(v); return p with { Margins = reduced.Margins(p.Row) }; };
+            for (int i = 0; i < n; i++) scan[i] = scan[i] with { Margins = reduced.Margins(scan[i].Row) };
+            points.Clear();
+            points.AddRange(scan);
+            search = search with { Require = reduced };
+        }
         bool monotone = search.Require.Active.All(name => Monotone(scan.Select(p => p.Margins[name]).ToList()));
         if (!monotone)
             notes.Add($"The response is not monotone over the range: every feasible interval found by the {n}-point scan is " +
@@ -54,14 +73,30 @@ public static class TargetSearcher
                 : $"No value of {search.Member} in [{search.From:G6}, {search.To:G6}] meets every requirement: the best margin reached is " +
                   $"{best.Margin:P1} ({best.Governing}) at {best.Value:G6}.";
             return new TargetSearchResult(null, false, best?.Governing, best?.Margins ?? new Dictionary<string, double?>(), intervals,
-                monotone, search.Tolerance, points, best?.Margin, best?.Value, message, notes);
+                monotone, search.Tolerance, points, best?.Margin, best?.Value, message, notes, search.Require);
         }
         var found = points.First(p => p.Value == intervals[0].From);
         string answer = $"{search.Member} = {found.Value:G6} meets every requirement (to ±{search.Tolerance:G3}); {found.Governing} governs " +
             $"with a margin of {found.Margin:P1}.";
         return new TargetSearchResult(found.Value, true, found.Governing, found.Margins, intervals, monotone, search.Tolerance, points,
-            found.Margin, found.Value, answer, notes);
+            found.Margin, found.Value, answer, notes, search.Require);
     }
+
+    private static string Missing(string name) => name switch
+    {
+        "exitFactor" => "the analyses give no factor against piping (the exit soil needs specificGravity and voidRatio, or saturatedUnitWeight).",
+        "heaveFactor" => "the analyses give no heave factor (a cutoff pointing down and the soil's unit weight data are needed).",
+        "maxUpliftForce" => "the section has no structure base for uplift.",
+        _ => "the analyses give no flow.",
+    };
+
+    private static TargetRequirements Without(TargetRequirements r, string name) => name switch
+    {
+        "exitFactor" => r with { ExitFactor = null },
+        "heaveFactor" => r with { HeaveFactor = null },
+        "maxUpliftForce" => r with { MaxUpliftForce = null },
+        _ => r with { MaxFlow = null },
+    };
 
     // Bisection between a passing and a failing point until they are closer than the tolerance; returns the passing end.
     private static (TargetPoint Edge, List<TargetPoint> Visited) Bisect(TargetPoint a, TargetPoint b, double tolerance,

@@ -45,6 +45,14 @@ public static class ImanConover
         return result;
     }
 
+    /// <summary>Whether the identity plus the given correlations is positive definite (smallest eigenvalue above 1e-9).</summary>
+    public static bool IsPositiveDefinite(int count, IReadOnlyList<VariableCorrelation> correlations)
+    {
+        var c = Matrix<double>.Build.DenseIdentity(count);
+        foreach (var p in correlations) { c[p.First, p.Second] = p.Rank; c[p.Second, p.First] = p.Rank; }
+        return c.Evd().EigenValues.All(e => e.Real > 1e-9);
+    }
+
     /// <summary>The rank (0-based) of each value in its column; ties broken by position.</summary>
     public static int[] Ranks(double[] values)
     {

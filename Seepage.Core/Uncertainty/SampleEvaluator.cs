@@ -30,6 +30,9 @@ public sealed class SampleEvaluator
         Kind = variables.Count == 0 ? MemberKind.Figures : variables.Max(v => MemberKinds.Of(v.Member));
         if (Kind == MemberKind.Geometry) return;
         _problem = new ReusableHeadProblem(Prepare(baseModel), cancellation);
+        if (Kind == MemberKind.Conductivity)
+            _problem.SharePreconditioner(_sections.Make(variables.Select(v => v.Distribution.Median).ToList(), out _) ?? baseModel,
+                options, cancellation);
         if (Kind <= MemberKind.Head) _superposition = new HeadSuperposition(_problem, Prepare(baseModel), options, cancellation);
     }
 
@@ -40,7 +43,8 @@ public sealed class SampleEvaluator
     public string Method => Kind switch
     {
         MemberKind.Geometry => "each sample meshed and analysed afresh (a varied member changes the geometry or the mesh)",
-        MemberKind.Conductivity => "one mesh and sparsity pattern for all samples; K re-assembled and solved per sample",
+        MemberKind.Conductivity => "one mesh and sparsity pattern for all samples; K re-assembled per sample and solved by CG " +
+            "preconditioned with one AMG hierarchy built at the medians",
         _ => "one AMG-preconditioned matrix for all samples; heads by superposition of unit-head solutions (linear in the heads)",
     };
 

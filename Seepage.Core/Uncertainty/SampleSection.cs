@@ -9,27 +9,29 @@ namespace Seepage.Core.Uncertainty;
 /// section. A sample value the validator refuses (e.g. a conductivity beyond the accepted range) gives problems instead.</summary>
 public sealed class SampleSection
 {
-    private readonly JsonNode _base;
+    // Kept as text and parsed per sample: a parsed JsonNode fills itself lazily and is not safe to read from several threads.
+    private readonly string _base;
     private readonly IReadOnlyList<UncertainVariable> _variables;
 
     public SampleSection(JsonNode baseSection, IReadOnlyList<UncertainVariable> variables)
     {
-        _base = baseSection;
+        _base = baseSection.ToJsonString();
         _variables = variables;
     }
 
     /// <summary>The section of one sample, or null with the problems (JSON pointer + message).</summary>
     public SectionModel? Make(IReadOnlyList<double> values, out IReadOnlyList<SectionProblem> problems)
     {
-        var section = _base.DeepClone();
+        var section = JsonNode.Parse(_base)!;
+        var original = JsonNode.Parse(_base)!;
         var list = new List<SectionProblem>();
         for (int j = 0; j < _variables.Count; j++)
         {
             var v = _variables[j];
-            if (MemberKinds.SoilOfKx(v.Member) is { } soil && Number(JsonPointer.Get(_base, v.Member)) is { } kx0)
+            if (MemberKinds.SoilOfKx(v.Member) is { } soil && Number(JsonPointer.Get(original, v.Member)) is { } kx0)
             {
                 string ky = $"/soils/{soil}/ky";
-                double ky0 = Number(JsonPointer.Get(_base, ky)) ?? kx0;
+                double ky0 = Number(JsonPointer.Get(original, ky)) ?? kx0;
                 if (!_variables.Any(o => o.Member == ky))
                     JsonPointer.Set(section, ky, JsonValue.Create(v.KeepAnisotropy ? ky0 * values[j] / kx0 : ky0));
             }

@@ -11,13 +11,14 @@ public sealed record UncertaintyResult(IReadOnlyList<SampleOutcome> Samples, Unc
 
 /// <summary>
 /// Runs an uncertainty study: draws the samples (<see cref="SampleDesign"/>), evaluates the FOSM points and then every
-/// sample on the machine's cores (<see cref="SampleEvaluator"/>), and summarises. <c>onSample</c> is called from worker
+/// sample on the machine's cores (<see cref="SampleEvaluator"/>), and summarises. <c>onFosm</c> gets the FOSM
+/// estimates and how samples are evaluated before the samples start. <c>onSample</c> is called from worker
 /// threads as each sample finishes, so a caller can report progress and partial statistics.
 /// </summary>
 public static class UncertaintyRunner
 {
     public static UncertaintyResult Run(JsonNode baseSection, SectionModel baseModel, UncertaintyStudy study, SolverOptions options,
-        Action<IReadOnlyDictionary<string, FosmEstimate>>? onFosm = null, Action<SampleOutcome>? onSample = null,
+        Action<IReadOnlyDictionary<string, FosmEstimate>, string>? onFosm = null, Action<SampleOutcome>? onSample = null,
         CancellationToken cancellation = default)
     {
         var values = SampleDesign.Draw(study.Variables, study.Samples, study.Seed, study.Sampling, study.RankCorrelations);
@@ -28,7 +29,7 @@ public static class UncertaintyRunner
         var atPoints = new SampleFigures?[points.Length];
         Parallel.For(0, points.Length, parallel, i => atPoints[i] = evaluator.Evaluate(-1 - i, points[i], cancellation).Figures);
         var fosm = Fosm.Estimate(study, atPoints);
-        onFosm?.Invoke(fosm);
+        onFosm?.Invoke(fosm, evaluator.Method);
 
         var outcomes = new SampleOutcome[study.Samples];
         Parallel.For(0, study.Samples, parallel, i =>

@@ -14,7 +14,7 @@ public sealed record UncertaintySummary(int Analysed, int Failed, IReadOnlyDicti
 
     public static UncertaintySummary Of(UncertaintyStudy study, IReadOnlyList<SampleOutcome> outcomes)
     {
-        var good = outcomes.Where(o => o.Figures is not null).ToList();
+        var good = outcomes.Where(o => o.Figures is not null).OrderBy(o => o.Index).ToList(); // the same order on every run
         var figures = new Dictionary<string, FigureStatistics>();
         var sensitivity = study.Variables.Select(v => v.Member).Distinct()
             .ToDictionary(m => m, _ => (IReadOnlyDictionary<string, double>)new Dictionary<string, double>());
@@ -29,11 +29,17 @@ public sealed record UncertaintySummary(int Analysed, int Failed, IReadOnlyDicti
                     with.Count > 2 ? Spearman.Rho(with.Select(o => o.Values[j]).ToList(), values) : double.NaN;
         }
         var checks = new Dictionary<string, CheckProbability>();
-        var exit = good.Where(o => o.Figures!.ExitFails is not null).ToList();
-        if (exit.Count > 0) checks["exit"] = CheckProbability.Of(exit.Count(o => o.Figures!.ExitFails == true), exit.Count, exit[0].Figures!.ExitRequiredFactor);
-        var heave = good.Where(o => o.Figures!.HeaveFails is not null).ToList();
-        if (heave.Count > 0) checks["heave"] = CheckProbability.Of(heave.Count(o => o.Figures!.HeaveFails == true), heave.Count, heave[0].Figures!.HeaveRequiredFactor);
+        Check("exit", f => f.ExitFails, f => f.ExitRequiredFactor);
+        Check("heave", f => f.HeaveFails, f => f.HeaveRequiredFactor);
         var reasons = outcomes.Where(o => o.Problem is not null).Select(o => o.Problem!).Distinct().Take(MaxReasons).ToList();
         return new UncertaintySummary(good.Count, outcomes.Count - good.Count, figures, checks, sensitivity, reasons);
+
+        // p_f over the samples that had the check (a factor to compare).
+        void Check(string name, Func<SampleFigures, bool?> fails, Func<SampleFigures, double> required)
+        {
+            var with = good.Where(o => fails(o.Figures!) is not null).ToList();
+            if (with.Count > 0)
+                checks[name] = CheckProbability.Of(with.Count(o => fails(o.Figures!) == true), with.Count, required(with[0].Figures!));
+        }
     }
 }

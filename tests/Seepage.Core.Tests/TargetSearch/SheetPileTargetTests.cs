@@ -46,7 +46,8 @@ public class SheetPileTargetTests(Xunit.Abstractions.ITestOutputHelper output)
         var search = new Seepage.Core.TargetSearch.TargetSearch("/cutoffs/0/tip/1", -1, -6, require,
             Seepage.Core.TargetSearch.TargetSearch.DefaultTolerance(-1, -6), scan);
         var options = new AnalysisOptions { FlowNet = false };
-        return TargetSearcher.Run(search, v => TargetEvaluator.Evaluate(section, search, v, options, default).Point);
+        string json = section.ToJsonString();
+        return TargetSearcher.Run(search, v => TargetEvaluator.Evaluate(json, search, v, options, default).Point);
     }
 
     [Fact]

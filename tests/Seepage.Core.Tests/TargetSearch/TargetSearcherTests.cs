@@ -54,4 +54,24 @@ public class TargetSearcherTests
     [InlineData(new[] { 1.0, 3, 2, 4 }, false)]
     public void Monotone_Sequences_DetectsDirectionChanges(double[] values, bool expected) =>
         Assert.Equal(expected, TargetSearcher.Monotone(values.Select(v => (double?)v).ToList()));
+
+    // The synthetic rows carry no heave factor: a default heave requirement is left out with a note, a posted one makes
+    // every point fail, also with the note.
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public void Run_RequirementTheSectionCannotCheck_DroppedOnlyWhenDefaulted(bool defaulted)
+    {
+        var require = new TargetRequirements(ExitFactor: 3, HeaveFactor: 1.5);
+        var search = new Seepage.Core.TargetSearch.TargetSearch("/x", 0, 10, require, 1e-3, 5, defaulted);
+        var result = TargetSearcher.Run(search, x =>
+        {
+            var row = new StudyRow(0, "p", [], 1e-5, 100, 0.3, 1 + x, 3, null, 1.5, null, 0, null);
+            return new TargetPoint(x, row, require.Margins(row));
+        });
+        Assert.Contains(result.Notes, n => n.StartsWith("heaveFactor could not be checked"));
+        Assert.Equal(defaulted, result.Feasible);
+        Assert.Equal(defaulted ? null : 1.5, result.Require.HeaveFactor);
+        if (defaulted) Assert.True(result.Value >= 2 && result.Value - 2 <= 1e-3, $"{result.Value}");
+    }
 }
