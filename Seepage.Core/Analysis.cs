@@ -4,6 +4,7 @@ using Seepage.Core.Meshing;
 using Seepage.Core.Results;
 using Seepage.Core.Sections;
 using Seepage.Core.Solvers;
+using Seepage.Core.Unconfined;
 
 namespace Seepage.Core;
 
@@ -23,9 +24,15 @@ public static class Analysis
         var stage = options.StageDone ?? (_ => { });
         var mesh = MakeMesh(section, warnings, cancellation);
         stage("mesh");
-        var problem = FieldSolver.Assemble(section, mesh, section.Mesh.Order);
-        stage("assembly");
-        var solution = FieldSolver.Solve(problem, mesh, options.Solver, cancellation);
+        var free = section.Unconfined ? UnconfinedSolver.Solve(section, mesh, options.Unconfined, options.Solver, cancellation) : null;
+        FieldSolution solution;
+        if (free is not null) solution = free.Solution;
+        else
+        {
+            var problem = FieldSolver.Assemble(section, mesh, section.Mesh.Order);
+            stage("assembly");
+            solution = FieldSolver.Solve(problem, mesh, options.Solver, cancellation);
+        }
         stage("solve");
         var (field, boundary, fixedHeads, report) = (solution.Field, solution.Boundary, solution.FixedHeads, solution.Report);
         double tolerance = 1e-6 * section.Extent;
@@ -41,12 +48,12 @@ public static class Analysis
         var independent = IndependentVariableCalculator.Compute(section, sampler, exit, warnings);
         var gauges = GaugeCalculator.Compute(section, sampler, reactions, fixedHeads.IsFixed);
         stage("figures");
-        var convergence = section.Mesh.ConvergenceCheck
+        var convergence = section.Mesh.ConvergenceCheck && !Skipped(free, "mesh.convergenceCheck", warnings)
             ? ConvergenceCheck.Run(section, solution, options.Solver, warnings, cancellation) : null;
         stage("convergence");
         // The first-order estimate costs nothing and always runs unless the section turns the check off; the wider
         // solve follows where needed when asked for, or automatically for small models.
-        var truncation = section.TruncationCheck == false ? null
+        var truncation = section.TruncationCheck == false || Skipped(free, "truncationCheck", warnings) ? null
             : TruncationCheck.Run(section, solution, flow.PerMetre, s => MakeMesh(s, [], cancellation), options.Solver,
                 section.TruncationCheck ?? mesh.TriangleCount < TruncationCheck.AutomaticBelowTriangles, warnings, cancellation);
         stage("truncation");
@@ -55,15 +62,18 @@ public static class Analysis
         if (options.FlowNet)
         {
             // The flow net is drawn from the vertex heads (the P1 part of a quadratic field).
-            // Linear elements: ψ from the element velocities by a walk (no solve); quadratic ones solve for it.
-            var psi = StreamFunctionWalk.Solve(field, boundary, cancellation)
-                ?? StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
+            // Linear elements: ψ from the element velocities by a walk (no solve); quadratic ones solve for it. An internal
+            // drain is a sink inside the domain, so ψ is not single-valued and no flow lines are drawn.
+            var psi = section.Drains.Any(d => d.Internal)
+                ? NoFlowLines(warnings)
+                : StreamFunctionWalk.Solve(field, boundary, cancellation)
+                    ?? StreamFunctionSolver.Solve(field, boundary, SparsityPattern.Of(mesh), fixedHeads.IsFixed, warnings, cancellation);
             stage("streamFunction");
             double high = section.Heads.Max(h => h.Total), low = section.Heads.Min(h => h.Total);
             if (section.Drains.Count > 0) low = Math.Min(low, section.Drains.SelectMany(d => d.Along).Min(p => p.Y));
             var reference = ConductivityTensor.Of(exitSoil);
             net = FlowNetBuilder.Build(field, psi, flow.PerMetre, high, low, reference.Mean,
-                options.HeadDrops ?? section.FlowNetHeadDrops) with
+                options.HeadDrops ?? section.FlowNetHeadDrops, field.ElementFactors?.Select(f => f >= 0.5).ToArray()) with
             {
                 ReferenceSoil = exitSoil.Id,
                 UniformIsotropic = exitSoil.Kx == exitSoil.Ky
@@ -74,9 +84,32 @@ public static class Analysis
         if (Math.Abs(flow.Balance) > 1e-6)
             warnings.Add(FormattableString.Invariant($"Flow balance: inflow and outflow differ by {flow.Balance:P4}."));
         var result = new AnalysisResult(section, mesh, field, flow, uplift, exit, heave, creep, report, net, warnings,
-            clock.Elapsed.TotalSeconds) { IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation };
+            clock.Elapsed.TotalSeconds)
+        {
+            IndependentVariables = independent, Gauges = gauges, Convergence = convergence, Truncation = truncation,
+            Unconfined = free?.Report,
+            PhreaticSurface = free is null ? [] : PhreaticSurfaceTracer.Trace(mesh, field.Heads),
+            SeepageFaces = free is null ? [] : SeepageFaceCalculator.Compute(section, boundary, fixedHeads, free.FaceNodes, reactions, tolerance),
+            HandMethods = free is null ? null : EmbankmentHandMethods.For(section, flow.PerMetre),
+        };
         FiniteResultGuard.Check(result);
         return result;
+    }
+
+    // The re-analyses on other meshes solve the confined problem; for an unconfined section they are not run (and
+    // the warning says so) rather than giving figures of a different problem.
+    private static bool Skipped(UnconfinedSolution? free, string member, List<string> warnings)
+    {
+        if (free is null) return false;
+        warnings.Add($"{member} was not run: it is not yet available for unconfined sections.");
+        return true;
+    }
+
+    private static double[]? NoFlowLines(List<string> warnings)
+    {
+        warnings.Add("Flow lines were not drawn: a drain inside the domain takes water from both sides, so no single "
+            + "stream function describes the flow. Equipotentials are drawn.");
+        return null;
     }
 
     /// <summary>Meshes the section (planar graph, then quality triangulation with slits at the cutoffs).</summary>

@@ -11,6 +11,9 @@ public sealed record AnalysisOptions
     /// <summary>Whether to compute the flow net (equipotentials and the stream function). Default true.</summary>
     public bool FlowNet { get; init; } = true;
 
+    /// <summary>Settings of the free-surface iteration of unconfined sections.</summary>
+    public Unconfined.UnconfinedOptions Unconfined { get; init; } = new();
+
     /// <summary>Number of equal head drops of the flow net; wins over the section's <c>flowNet.headDrops</c>.
     /// Default null: the section's value, or chosen for square cells (<see cref="Results.FlowNetBuilder.ChooseHeadDrops"/>).</summary>
     public int? HeadDrops { get; init; }

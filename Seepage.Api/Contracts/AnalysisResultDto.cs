@@ -23,7 +23,12 @@ public sealed record AnalysisResultDto(
     bool? Pass = null,
     IReadOnlyList<string>? PassCovers = null,
     System.Text.Json.Nodes.JsonNode? AnalysedSection = null,
-    IReadOnlyList<AssumptionDto>? Assumptions = null);
+    IReadOnlyList<AssumptionDto>? Assumptions = null,
+    IReadOnlyList<PhreaticLineDto>? PhreaticSurface = null,
+    IReadOnlyList<SeepageFaceDto>? SeepageFaces = null,
+    UnconfinedDto? Unconfined = null,
+    HandMethodsDto? HandMethods = null);
+
 
 /// <summary>One check and its verdict (<c>pass</c> true/false, null without one), or <c>skipped</c>: why it did not run or
 /// gave no verdict. The result's <c>pass</c> is false when any verdict fails, true when all pass, and covers the checks
@@ -41,7 +46,7 @@ public sealed record FlowDto(double PerMetre, string Unit, double Inflow, double
     double PerMetrePerDay, double LitresPerMinutePerMetre, IReadOnlyList<BoundaryFlowDto> Boundaries,
     double? StructureLength = null, double? Total = null, double? TotalPerDay = null);
 
-/// <summary>Flow through one head or drain boundary, m³/s per m, positive into the soil.</summary>
+/// <summary>Flow through one head, drain or seepage-face boundary (<c>kind</c>), m³/s per m, positive into the soil.</summary>
 public sealed record BoundaryFlowDto(string Name, string Kind, double Flow);
 
 /// <summary>Uplift under one structure: stations (x, y in m, total head in m, pore pressure in kPa),

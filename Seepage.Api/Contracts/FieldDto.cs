@@ -6,7 +6,8 @@ namespace Seepage.Api.Contracts;
 /// equal head drops and flow lines bounding equal-flow channels (polylines of [x, y] in m); per triangle, the
 /// head gradient [∂h/∂x, ∂h/∂y] (dimensionless) and the Darcy velocity [vx, vy] = −K∇h (m/s) at its centroid.
 /// <c>zoneSoils</c> names the soil of each zone index: the section's zones first, then any pieces a permeable wall
-/// split off them and the walls themselves.
+/// split off them and the walls themselves. <c>unconfined</c> (unconfined sections only): pressure heads, the saturated
+/// part of the mesh and the phreatic surface; the flow net is then drawn in the saturated triangles only.
 /// </summary>
 public sealed record FieldDto(
     string Id,
@@ -20,7 +21,8 @@ public sealed record FieldDto(
     IReadOnlyList<double[][]> Walls,
     double[][] Gradients,
     double[][] Velocities,
-    IReadOnlyList<string>? ZoneSoils = null);
+    IReadOnlyList<string>? ZoneSoils = null,
+    UnconfinedFieldDto? Unconfined = null);
 
 /// <summary>One equipotential: its total head in m and the polylines where the field takes it.</summary>
 public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Paths);

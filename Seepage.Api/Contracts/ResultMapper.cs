@@ -40,11 +40,26 @@ public static class ResultMapper
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
             r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change,
-                tr.Method) : null)
+                tr.Method) : null,
+            PhreaticSurface: r.PhreaticSurface.Select(l => new PhreaticLineDto(Line(l.Points))).ToList(),
+            SeepageFaces: r.SeepageFaces.Select(x => new SeepageFaceDto(x.Name, x.Flow, Pair(x.ExitPoint), x.WettedLength)).ToList(),
+            Unconfined: r.Unconfined is { } u ? new UnconfinedDto(u.Iterations, u.Method, u.Change, u.Band, u.Floor, u.LinearIterations, u.Seconds) : null,
+            HandMethods: r.HandMethods is { } hm ? new HandMethodsDto(hm.ReservoirDepth, hm.Estimates.Select(x =>
+                new HandEstimateDto(x.Method, x.Source, x.Applies, x.Note, x.Flow, Pair(x.ExitPoint), x.Difference)).ToList()) : null)
             with { Checks = checks.Select(c => new CheckDto(c.Check, c.Pass, c.Skipped)).ToList(), Pass = pass, PassCovers = covers,
                 AnalysedSection = r.Section.Analysed is { } a ? JsonNode.Parse(SectionParser.Write(a)) : null,
                 Assumptions = r.Section.Assumptions.Select(x => new AssumptionDto(x.Member, JsonSerializer.SerializeToNode(x.Value), x.Unit,
                     x.Origin, x.Note)).ToList() };
+    }
+
+    private static double[]? Pair(Point2? p) => p is { } v ? [Math.Round(v.X, 5), Math.Round(v.Y, 5)] : null;
+
+    private static UnconfinedFieldDto? UnconfinedField(AnalysisResult r)
+    {
+        if (r.Unconfined is null || r.Field.ElementFactors is not { } kr) return null;
+        var p = Seepage.Core.Results.PhreaticSurfaceTracer.PressureHead(r.Mesh, r.Field.Heads);
+        return new UnconfinedFieldDto(p.Select(v => Math.Round(v, 6)).ToArray(), kr.Select(Significant).ToArray(),
+            r.PhreaticSurface.Select(l => Line(l.Points)).ToList());
     }
 
     public static FieldDto ToFieldDto(string id, AnalysisResult r)
@@ -74,7 +89,7 @@ public static class ResultMapper
         }
         return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
             equipotentials, flowLines, counts, walls, gradients, velocities,
-            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList());
+            r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList(), UnconfinedField(r));
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :

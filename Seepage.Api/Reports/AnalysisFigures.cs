@@ -8,6 +8,7 @@ public static class AnalysisFigures
 {
     private static readonly string[] ZoneFills = ["#f3e7c9", "#dfe8d0", "#e4dcef", "#d8e6ee", "#f0d9d2", "#e8e8e8"];
     public const string Equipotential = "#1f5fbf", FlowLine = "#333333", Wall = "#000000", Head = "#1f8fbf", Drain = "#2a9d4a";
+    public const string Phreatic = "#0a3d8f", SeepageFace = "#c2410c";
 
     /// <summary>The section: zones shaded by soil, structures and cutoffs in black, head boundaries in blue, drains in green.</summary>
     public static Figure Geometry(SectionDocument section, PresentationUnits u)
@@ -39,9 +40,9 @@ public static class AnalysisFigures
             foreach (var path in e.Paths) items.Add(new FigureItem(Points(path), Equipotential, 0.8));
         foreach (var l in field.FlowLines) items.Add(new FigureItem(Points(l.Points), FlowLine, 0.8));
         foreach (var w in field.Walls) items.Add(new FigureItem(Points(w), Wall, 2.5));
-        return Scaled(new Figure("x", "elevation y", true, items,
-            [new(Equipotential, "equipotential"), new(FlowLine, "flow line"), new(Wall, "structure, cutoff")]), u.LengthFactor, u.LengthFactor,
-            u.LengthUnit, u.LengthUnit);
+        List<LegendEntry> legend = [new(Equipotential, "equipotential"), new(FlowLine, "flow line"), new(Wall, "structure, cutoff")];
+        if (field.Unconfined is { } uf) legend.AddRange(UnconfinedMemo.FigureItems(section, uf, items));
+        return Scaled(new Figure("x", "elevation y", true, items, legend), u.LengthFactor, u.LengthFactor, u.LengthUnit, u.LengthUnit);
     }
 
     /// <summary>Pore pressure along each structure base (kPa against x), shaded down to zero.</summary>
@@ -92,7 +93,7 @@ public static class AnalysisFigures
             : f.Items.Select(i => i with { Points = i.Points.Select(p => new FigurePoint(p.X * sx, p.Y * sy)).ToList() }).ToList(),
     };
 
-    private static List<FigureItem> Zones(SectionDocument section, bool shaded)
+    internal static List<FigureItem> Zones(SectionDocument section, bool shaded)
     {
         var soils = (section.Soils ?? []).Select(s => s.Id).ToList();
         return (section.Zones ?? []).Where(z => z.Outline is { Count: >= 3 }).Select(z =>
@@ -119,8 +120,8 @@ public static class AnalysisFigures
         }
     }
 
-    private static List<FigurePoint> Line(List<double[]>? points) =>
+    internal static List<FigurePoint> Line(List<double[]>? points) =>
         (points ?? []).Where(p => p.Length >= 2).Select(p => new FigurePoint(p[0], p[1])).ToList();
 
-    private static List<FigurePoint> Points(double[][] points) => points.Where(p => p.Length >= 2).Select(p => new FigurePoint(p[0], p[1])).ToList();
+    internal static List<FigurePoint> Points(double[][] points) => points.Where(p => p.Length >= 2).Select(p => new FigurePoint(p[0], p[1])).ToList();
 }

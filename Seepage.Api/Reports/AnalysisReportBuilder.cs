@@ -52,6 +52,7 @@ public static class AnalysisReportBuilder
         blocks.Add(new ReportTable(ChecksCaption, ChecksHeaders, [.. Checks(r, u), .. AnalysisReportExtras.CheckRows(r, u)]));
         blocks.AddRange(AnalysisReportExtras.Blocks(r));
         blocks.AddRange(AssumptionBlocks.Blocks(r));
+        blocks.AddRange(UnconfinedMemo.Blocks(r));
         if (r.Warnings.Count > 0) { blocks.Add(new ReportHeading("Warnings")); blocks.Add(new ReportList(r.Warnings)); }
         blocks.Add(new ReportHeading("3. Methods and sources"));
         blocks.Add(new ReportList(Methods(r, section)));

@@ -19,9 +19,10 @@ public static class SectionSheetLayout
     public const string Checks = "checks";
     public const string Mesh = "mesh";
     public const string Gauges = "gauges";
+    public const string SeepageFaces = "seepage faces";
 
     /// <summary>Block names in the order the templates write them.</summary>
-    public static readonly IReadOnlyList<string> Blocks = [Section, Soils, Zones, Structures, Cutoffs, Heads, Drains, Checks, Mesh, Gauges];
+    public static readonly IReadOnlyList<string> Blocks = [Section, Soils, Zones, Structures, Cutoffs, Heads, Drains, SeepageFaces, Checks, Mesh, Gauges];
 
     /// <summary>Blocks every section needs.</summary>
     public static readonly IReadOnlyList<string> RequiredBlocks = [Soils, Zones, Heads];
@@ -30,7 +31,7 @@ public static class SectionSheetLayout
     public static readonly IReadOnlyDictionary<string, string[]> Columns = new Dictionary<string, string[]>
     {
         [Section] = ["title", "description", "conductivityUnit", "lengthUnit", "unitWeightUnit", "waterUnitWeight", "structureLength",
-            "truncationCheck"],
+            "truncationCheck", "unconfined"],
         [Soils] = ["id", "kx", "ky", "beddingAngle", "specificGravity", "voidRatio", "saturatedUnitWeight", "creepClass"],
         [Zones] = ["zone", "soil", "x", "y", "size"],
         [Structures] = ["name", "x", "y"],
@@ -40,6 +41,7 @@ public static class SectionSheetLayout
         [Checks] = ["check", "x", "y", "depth", "requiredFactor"],
         [Mesh] = ["size", "minAngle", "order", "convergenceCheck"],
         [Gauges] = ["name", "x", "y"],
+        [SeepageFaces] = ["name", "x", "y"],
     };
 
     /// <summary>Columns a block cannot do without.</summary>
@@ -55,6 +57,7 @@ public static class SectionSheetLayout
         [Checks] = ["check"],
         [Mesh] = [],
         [Gauges] = ["name", "x", "y"],
+        [SeepageFaces] = ["name", "x", "y"],
     };
 
     /// <summary>The unit written after a column name in the templates; "k" stands for the section's conductivity unit.</summary>

@@ -41,6 +41,10 @@ public static class SectionSheetReader
             {
                 Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/drains/{i}/along"),
             }).ToList()),
+            SeepageFaces = Any(Of(L.SeepageFaces), bs => Lines(bs, "name", cells).Select((g, i) => new SeepageFaceDocument
+            {
+                Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/seepageFaces/{i}/along"),
+            }).ToList()),
             Gauges = Any(Of(L.Gauges), bs => Lines(bs, "name", cells).Select((g, i) => new GaugeDocument
             {
                 Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/gauges/{i}/along"),
@@ -83,6 +87,7 @@ public static class SectionSheetReader
                 WaterUnitWeight = cells.Number(b, r, "waterUnitWeight", "/waterUnitWeight"),
                 StructureLength = cells.Number(b, r, "structureLength", "/structureLength"),
                 TruncationCheck = cells.Flag(b, r, "truncationCheck", "/truncationCheck"),
+                Unconfined = cells.Flag(b, r, "unconfined", "/unconfined"),
             };
         }
         return doc;

@@ -13,7 +13,7 @@ public static class SectionSheetWriter
         void Add(string block, IEnumerable<object?[]> rows) => blocks.Add((block, [Header(block, d), .. rows]));
 
         Add(L.Section, [[d.Title, d.Description, d.ConductivityUnit, d.LengthUnit, d.UnitWeightUnit, d.WaterUnitWeight, d.StructureLength,
-            d.TruncationCheck]]);
+            d.TruncationCheck, d.Unconfined]]);
         if (d.Soils is { } soils)
             Add(L.Soils, soils.Select(s => new object?[] { s.Id, s.Kx, s.Ky, s.BeddingAngle, s.SpecificGravity, s.VoidRatio, s.SaturatedUnitWeight, s.CreepClass }));
         if (d.Zones is { } zones)
@@ -27,6 +27,8 @@ public static class SectionSheetWriter
             Add(L.Heads, heads.SelectMany(h => (h.Along ?? []).Select((p, v) => new object?[] { h.Name, v == 0 ? h.Total : null, X(p), Y(p) })));
         if (d.Drains is { } drains)
             Add(L.Drains, drains.SelectMany(h => (h.Along ?? []).Select(p => new object?[] { h.Name, X(p), Y(p) })));
+        if (d.SeepageFaces is { } faces)
+            Add(L.SeepageFaces, faces.SelectMany(f => (f.Along ?? []).Select(p => new object?[] { f.Name, X(p), Y(p) })));
         if (d.ExitCheck is not null || d.HeaveCheck is not null)
         {
             var rows = new List<object?[]>();

@@ -5,10 +5,11 @@ using Seepage.Core.Meshing;
 namespace Seepage.Core.Results;
 
 /// <summary>Level lines of a P1 nodal field: in each triangle the level crosses two edges at linearly
-/// interpolated points; the pieces are joined into polylines through the mesh edges they share.</summary>
+/// interpolated points; the pieces are joined into polylines through the mesh edges they share. An optional mask
+/// keeps the lines to the triangles it marks (the saturated soil of an unconfined section).</summary>
 public static class ContourTracer
 {
-    public static List<List<Point2>> Trace(Mesh mesh, double[] values, double level)
+    public static List<List<Point2>> Trace(Mesh mesh, double[] values, double level, bool[]? keep = null)
     {
         var tri = mesh.Triangles;
         // Each piece joins two crossed mesh edges, keyed by their (min, max) node pair.
@@ -17,6 +18,7 @@ public static class ContourTracer
         Span<Point2> pts = stackalloc Point2[2];
         for (int t = 0; t < mesh.TriangleCount; t++)
         {
+            if (keep is not null && !keep[t]) continue;
             int found = 0;
             for (int e = 0; e < 3 && found < 2; e++)
             {

@@ -42,7 +42,7 @@ public static class FlowNetBuilder
 
     /// <summary>Builds the net; <paramref name="headDrops"/> null chooses Nd by <see cref="ChooseHeadDrops"/>.</summary>
     public static FlowNet Build(HeadField field, double[]? psi, double discharge, double highHead, double lowHead,
-        double referenceConductivity, int? headDrops = null)
+        double referenceConductivity, int? headDrops = null, bool[]? saturated = null)
     {
         double dh = highHead - lowHead;
         double shape = dh > 0 && referenceConductivity > 0 ? Math.Abs(discharge) / (referenceConductivity * dh) : 0;
@@ -52,7 +52,7 @@ public static class FlowNetBuilder
             for (int k = 1; k < nd; k++)
             {
                 double level = highHead - k * dh / nd;
-                equipotentials.Add(new Equipotential(level, Paths(field, field.Heads, level)));
+                equipotentials.Add(new Equipotential(level, Paths(field, field.Heads, level, saturated)));
             }
         double exact = shape * nd;
         // Flow lines at whole channels j/Nf (Nf exact); the last channel, by the far boundary, is the part one.
@@ -65,7 +65,7 @@ public static class FlowNetBuilder
             {
                 double fraction = j / exact;
                 if (fraction >= 1 - 1e-6) break;
-                flowLines.Add(new FlowLine(fraction, Paths(field, psi, lo + fraction * (hi - lo))));
+                flowLines.Add(new FlowLine(fraction, Paths(field, psi, lo + fraction * (hi - lo), saturated)));
             }
         }
         return new FlowNet(equipotentials, flowLines, whole, nd, shape, dh, referenceConductivity, psi)
@@ -74,6 +74,6 @@ public static class FlowNetBuilder
         };
     }
 
-    private static List<IReadOnlyList<Point2>> Paths(HeadField field, double[] values, double level) =>
-        ContourTracer.Trace(field.Mesh, values, level).Select(p => (IReadOnlyList<Point2>)p).ToList();
+    private static List<IReadOnlyList<Point2>> Paths(HeadField field, double[] values, double level, bool[]? saturated) =>
+        ContourTracer.Trace(field.Mesh, values, level, saturated).Select(p => (IReadOnlyList<Point2>)p).ToList();
 }

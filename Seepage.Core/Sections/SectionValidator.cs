@@ -74,7 +74,9 @@ public static class SectionValidator
             && problems.All(p => !p.Pointer.StartsWith("/heads", StringComparison.Ordinal)))
             problems.Add(new("/heads", $"every fixed head is {heads[0].Total} m and there is no drain: nothing drives a flow."));
 
-        var exit = ReadExit(doc.ExitCheck, heads, domain, tolerance, reader, problems);
+        // An unconfined section's water leaves through its seepage faces: the exit check defaults to the first one.
+        var exitDefault = unconfined && faces.Count > 0 ? faces[0].Along : heads.Count > 0 ? heads.MinBy(h => h.Total)!.Along : null;
+        var exit = ReadExit(doc.ExitCheck, exitDefault, domain, tolerance, reader, problems);
         ExitSurfaceCheck.Check(doc, exit, heads, drains, tolerance, problems);
         double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? 1.5;
         if (!double.IsFinite(heaveFactor) || heaveFactor <= 0)
@@ -223,7 +225,7 @@ public static class SectionValidator
         return heads;
     }
 
-    private static ExitCheck? ReadExit(ExitCheckDocument? doc, List<HeadBoundary> heads, Domain? domain, double tolerance,
+    private static ExitCheck? ReadExit(ExitCheckDocument? doc, IReadOnlyList<Point2>? defaultAlong, Domain? domain, double tolerance,
         PointReader reader, List<SectionProblem> problems)
     {
         double depth = doc?.Depth ?? 0.5;
@@ -237,7 +239,7 @@ public static class SectionValidator
             if (along is not null && domain is not null && !domain.PolylineOnBoundary(along, tolerance * 10))
                 problems.Add(new("/exitCheck/along", "does not lie on the boundary of the zones."));
         }
-        else along = heads.Count > 0 ? heads.MinBy(h => h.Total)!.Along : null;
+        else along = defaultAlong;
         return along is null ? null : new ExitCheck(along, depth, required, doc?.Along is not null);
     }
 

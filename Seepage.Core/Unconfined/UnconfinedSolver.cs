@@ -23,6 +23,9 @@ public static class UnconfinedSolver
 {
     public const string MethodName = "Picard iteration on a fixed mesh";
 
+    // Below this many unknowns the inner solves use IC(0) rather than AMG.
+    private const int SmallSystem = 20_000;
+
     public static UnconfinedSolution Solve(SectionModel section, Mesh mesh, UnconfinedOptions options, SolverOptions solver,
         CancellationToken cancellation = default)
     {
@@ -41,10 +44,13 @@ public static class UnconfinedSolver
         string method = FormattableString.Invariant(
             $"{MethodName}: saturated–unsaturated conductivity (band {kr.Band:G3} m, floor {kr.Floor:G2}), potential seepage faces switched");
 
+
         var factors = new double[mesh.TriangleCount]; Array.Fill(factors, 1.0);
         double[]? h = null;
         double previous = double.PositiveInfinity, change = double.NaN, omega = 1;
-        int linear = 0;
+        int linear = 0, builtFor = -1, lastIterations = 0, freshIterations = 0;
+        IPreconditioner? preconditioner = null;
+        bool switchedSinceBuild = false;
         for (int iteration = 1; ; iteration++)
         {
             cancellation.ThrowIfCancellationRequested();
@@ -56,7 +62,22 @@ public static class UnconfinedSolver
             var system = LinearSystem.Condense(full, fixedHeads);
             var free = new double[system.Matrix.Size];
             if (h is not null) for (int r = 0; r < free.Length; r++) free[r] = h[system.FreeNodes[r]];
-            var report = LinearSolver.Solve(system.Matrix, system.Rhs, free, solver with { RelativeTolerance = inner }, cancellation);
+            // The AMG hierarchy of an earlier iteration still preconditions CG well while the free set is the same and
+            // k_r has moved little; it is rebuilt when the switch changed or CG needs twice its fresh iteration count.
+            // Small systems take IC(0), whose setup costs next to nothing against an AMG setup.
+            bool rebuild = preconditioner is null || builtFor != system.Matrix.Size || switchedSinceBuild
+                || lastIterations > Math.Max(8, 2 * freshIterations);
+            if (rebuild)
+            {
+                preconditioner = system.Matrix.Size < SmallSystem
+                    ? new IncompleteCholeskyPreconditioner(system.Matrix)
+                    : new AlgebraicMultigridPreconditioner(system.Matrix, solver, cancellation);
+                builtFor = system.Matrix.Size; switchedSinceBuild = false;
+            }
+            var report = ConjugateGradient.Solve(system.Matrix, system.Rhs, free, preconditioner!,
+                solver with { RelativeTolerance = inner }, cancellation);
+            lastIterations = report.Iterations;
+            if (rebuild) freshIterations = Math.Max(report.Iterations, 4);
             linear += report.Iterations;
             var star = system.Expand(free);
             var reactions = new double[star.Length];
@@ -64,18 +85,24 @@ public static class UnconfinedSolver
             double flowScale = 0;
             for (int i = 0; i < star.Length; i++) if (fixedHeads.IsFixed[i]) flowScale += Math.Abs(reactions[i]);
             int switched = faces.Update(star, reactions, y, flowScale, height);
+            switchedSinceBuild |= switched > 0;
 
             if (h is null) { change = height; h = star; }
             else
             {
+                // The change that matters is where k_r can still move: deep in the unsaturated soil (p below −2δ in
+                // both iterates) k_r sits at its floor and the heads, set by the floor's flow alone, do not feed back.
                 change = 0;
-                for (int i = 0; i < h.Length; i++) change = Math.Max(change, Math.Abs(star[i] - h[i]));
+                double dry = -2 * kr.Band;
+                for (int i = 0; i < h.Length; i++)
+                    if (star[i] - y[i] > dry || h[i] - y[i] > dry) change = Math.Max(change, Math.Abs(star[i] - h[i]));
                 if (change > previous) omega = Math.Max(options.MinDamping, 0.5 * omega);
                 else omega = Math.Min(1, 1.25 * omega);
                 for (int i = 0; i < h.Length; i++) h[i] += omega * (star[i] - h[i]);
                 previous = change;
             }
-            bool settled = switched == 0 && change <= options.Tolerance * height && inner <= solver.RelativeTolerance;
+            bool settled = switched == 0 && change <= options.Tolerance * height
+                && inner <= solver.RelativeTolerance;
             if (settled)
             {
                 var field = new HeadField(mesh, star, tensors) { ElementFactors = (double[])factors.Clone() };

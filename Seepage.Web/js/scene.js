@@ -4,6 +4,7 @@
 import { clear, html } from './dom.js';
 import { fixed, sig } from './format.js';
 import { sectionBounds, drawSoilFill, drawZoneOutlines, drawFeatures, drawSoilKey } from './section-view.js';
+import { drawUnconfined } from './unconfined-view.js';
 import { headRange, drawHeadFill, drawMesh, drawEquipotentials, drawFlowLines, drawWalls, drawExitMarker, drawHeadLegend } from './field-view.js';
 import { FieldProbe } from './probe.js';
 import { drawVelocityArrows } from './arrows.js';
@@ -76,6 +77,7 @@ export class Scene {
     else drawSoilKey(p.legend, section);
     p.applyView();
     this.renderFlowNet();
+    if (field?.unconfined) drawUnconfined(p.layers.features, this.flowNetEl, field, section);
     this.probeEl.textContent = this.idleText();
   }
 
@@ -111,6 +113,7 @@ export class Scene {
         `|i| = ${sig(Math.hypot(hit.gradX, hit.gradY), 3)}`,
         `i up = ${sig(-hit.gradY, 3)}`);
       if (soil) parts.push(`soil ${soil}`);
+      if (this.field.unconfined && hit.head < w.y) parts.push('unsaturated: negative pore pressure above the phreatic surface');
     } else if (this.probe) {
       parts.push('outside the mesh');
     }

@@ -14,7 +14,8 @@ switch (mode)
     case "coldstart": ColdStartBenchmark.Run(rest); return 0;
     case "order2": Order2Benchmark.Run(rest); return 0;
     case "uncertainty": UncertaintyBenchmark.Run(rest); return 0;
+    case "unconfined": UnconfinedBenchmark.Run(rest); return 0;
     default:
-        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|order2|uncertainty> [options]");
+        Console.Error.WriteLine("usage: Seepage.Benchmarks <mesh|solve|stages|service|coldstart|order2|uncertainty|unconfined> [options]");
         return 1;
 }

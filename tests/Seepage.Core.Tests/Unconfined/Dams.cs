@@ -24,4 +24,38 @@ internal static class Dams
             Mesh = new MeshDocument { Size = size },
         };
     }
+
+    /// <summary>Kozeny's dam (Kozeny 1931): a horizontal drain 0 ≤ x ≤ 10 m on the base with its upstream end (the focus)
+    /// at the origin, and an upstream face on the equipotential parabola x = y²/(2c) − c/2, c = H²/y0, up to a crest at
+    /// 1.2·H. The exact solution has q = k·y0 and the phreatic line x = (y0² − y²)/(2·y0).</summary>
+    public static SectionDocument Kozeny(double h, double y0, double k = 1e-5, double size = 0.4)
+    {
+        double c = h * h / y0, top = 1.2 * h;
+        var face = Enumerable.Range(0, 41).Select(i => top * i / 40).Select(y => P(y * y / (2 * c) - c / 2, y)).ToList();
+        var outline = new List<double[]>(face) { P(10, top), P(10, 0) };
+        return new SectionDocument
+        {
+            Title = "Kozeny dam test",
+            Unconfined = true,
+            Soils = [new SoilDocument { Id = "fill", Kx = k }],
+            Zones = [new ZoneDocument { Soil = "fill", Outline = outline }],
+            Heads = [new HeadDocument { Name = "reservoir", Along = face, Total = h }],
+            Drains = [new DrainDocument { Name = "drain", Along = [P(0, 0), P(10, 0)] }],
+            Mesh = new MeshDocument { Size = size },
+        };
+    }
+
+    /// <summary>A trapezoidal homogeneous dam: base y = 0, height 12 m, upstream slope 1:3, crest 6 m, downstream slope
+    /// 1:2.5 (21.8°), reservoir 10 m; with a toe drain 58 ≤ x ≤ 72 m or a seepage face on the downstream slope only.</summary>
+    public static SectionDocument Trapezoid(bool toeDrain, double k = 2e-6, double size = 0.6) => new()
+    {
+        Title = "trapezoidal dam test",
+        Unconfined = true,
+        Soils = [new SoilDocument { Id = "fill", Kx = k, SpecificGravity = 2.68, VoidRatio = 0.6 }],
+        Zones = [new ZoneDocument { Soil = "fill", Outline = [P(0, 0), P(72, 0), P(42, 12), P(36, 12)] }],
+        Heads = [new HeadDocument { Name = "reservoir", Along = [P(0, 0), P(36, 12)], Total = 10 }],
+        Drains = toeDrain ? [new DrainDocument { Name = "toe drain", Along = [P(58, 0), P(72, 0)] }] : [],
+        SeepageFaces = [new SeepageFaceDocument { Name = "downstream slope", Along = [P(72, 0), P(42, 12)] }],
+        Mesh = new MeshDocument { Size = size },
+    };
 }
