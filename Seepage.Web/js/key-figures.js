@@ -23,8 +23,9 @@ export function renderKeyFigures(container, result, unit, stale = false) {
   }
   for (const h of result.heave ?? []) {
     const value = h.factor === null || h.factor === undefined ? 'needs Gs and e' : fixed(h.factor, 2);
-    rows.push(row(`heave-${h.cutoff}`, `Heave factor, ${h.cutoff}`, value, `≥ ${fixed(h.requiredFactor, 2)}`, h.pass,
-      `Terzaghi prism, D = ${fixed(h.depth, 2)} m`));
+    rows.push(row(`heave-${h.cutoff}`, `Heave factor, ${h.cutoff}`, value, `≥ ${fixed(h.requiredFactor, 2)}`,
+      h.skipped ? undefined : h.pass,
+      h.skipped ? `not in the verdict: ${h.skipped}` : `Terzaghi prism, D = ${fixed(h.depth, 2)} m`));
   }
   const c = result.creep;
   if (c?.lane) rows.push(creep('lane', 'Creep ratio (Lane, weighted)', c.lane));
@@ -33,7 +34,16 @@ export function renderKeyFigures(container, result, unit, stale = false) {
   container.append(html('table', { id: 'key-table' },
     html('colgroup', {}, ['figure', 'value', 'required', 'check'].map(c => html('col', { class: `c-${c}` }))),
     html('thead', {}, html('tr', {}, html('th', {}, 'figure'), html('th', {}, 'value'), html('th', {}, 'required'), html('th', {}, ''))),
-    html('tbody', {}, rows)));
+    html('tbody', {}, rows), overall(result)));
+}
+
+// The section's verdict, naming the checks it covers (the result's passCovers) and those that gave no verdict.
+function overall(result) {
+  if (result.pass === undefined || result.pass === null) return html('tfoot', {});
+  const covers = (result.passCovers ?? []).join(', ') || 'no check';
+  const skipped = (result.checks ?? []).filter(c => c.skipped).map(c => c.check);
+  const how = `covers ${covers}` + (skipped.length ? `; no verdict: ${skipped.join(', ')} (see All figures)` : '');
+  return html('tfoot', {}, row('overall', 'Verdict of the checks', '', '', result.pass, how));
 }
 
 function creep(key, label, check) {
