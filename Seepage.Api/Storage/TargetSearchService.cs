@@ -92,7 +92,7 @@ public sealed class TargetSearchService(DesignRunStore store, AnalysisService an
             logger.LogError(ex, "Target search {Id} failed", run.Id);
         }
         finally { jobs.End(run.Id); }
-        logger.LogInformation("Target search {Id} '{Title}': {Status}, {Points} points in {Seconds:F2} s, value {Value}", run.Id, run.Title,
+        logger.LogInformation("Target search {Id} '{Title}': {Status}, {Points} points in {Seconds:F2} s, value {Value}", run.Id, SafeText.Of(run.Title, 120),
             run.Status, run.Points.Count, run.Clock.Elapsed.TotalSeconds, run.Result?.Value);
         await store.UpdateAsync(run.Id, run.Status, Serialize(Snapshot(run)), null, CancellationToken.None);
     }

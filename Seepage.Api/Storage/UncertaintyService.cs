@@ -95,7 +95,7 @@ public sealed class UncertaintyService(DesignRunStore store, RunningJobs jobs, I
             logger.LogError(ex, "Uncertainty study {Id} failed", run.Id);
         }
         finally { jobs.End(run.Id); }
-        logger.LogInformation("Uncertainty study {Id} '{Title}': {Status}, {Done}/{Total} samples in {Seconds:F2} s", run.Id, run.Title,
+        logger.LogInformation("Uncertainty study {Id} '{Title}': {Status}, {Done}/{Total} samples in {Seconds:F2} s", run.Id, SafeText.Of(run.Title, 120),
             run.Status, run.Samples.Count, run.Study.Samples, run.Clock.Elapsed.TotalSeconds);
         string rows;
         lock (run) rows = JsonSerializer.Serialize(run.Samples.Select(UncertaintyMapper.Row).ToList(), AnalysisService.Json);
