@@ -21,6 +21,13 @@ fi
 # The clone must build on its own: no project may reference a file outside the repository.
 ./tools/check-repo-paths.sh || { echo "0 passed, 1 failed"; exit 1; }
 
+# A throw-away PostgreSQL cluster for the PostgreSQL store tests (installed from Debian's packages when missing),
+# stopped on every exit; the tests fail rather than skip when it is missing here.
+pgdir=$(mktemp -d /tmp/seepage-pg.XXXXXX)
+trap './tools/pg-cluster.sh stop "$pgdir"' EXIT
+SEEPAGE_TEST_POSTGRES=$(./tools/pg-cluster.sh start "$pgdir") || { echo "Could not start PostgreSQL." >&2; echo "0 passed, 1 failed"; exit 1; }
+export SEEPAGE_TEST_POSTGRES SEEPAGE_REQUIRE_POSTGRES=1
+
 log=$(mktemp)
 dotnet test Seepage.sln -c Release 2>&1 | tee "$log"
 status=${PIPESTATUS[0]}

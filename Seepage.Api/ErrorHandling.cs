@@ -3,18 +3,13 @@ using Seepage.Api.Errors;
 namespace Seepage.Api;
 
 /// <summary>Exceptions that escape an endpoint become RFC 9457 problem details (<see cref="ProblemExceptionHandler"/>);
-/// bare status codes (405, a route that does not exist) get a problem body too.</summary>
+/// bare status codes (404, 405, a route that does not take the body's type) get a problem body too
+/// (<see cref="ApiProblems.ForStatus"/>), naming the part of the request at fault in <c>errors</c>.</summary>
 public static class ErrorHandling
 {
     public static IServiceCollection AddSeepageErrorHandling(this IServiceCollection services)
     {
-        services.AddProblemDetails(o => o.CustomizeProblemDetails = c =>
-        {
-            // Routing refuses a body type an operation does not declare before any endpoint runs; say which type.
-            if (c.ProblemDetails.Status == StatusCodes.Status415UnsupportedMediaType && c.ProblemDetails.Detail is null)
-                c.ProblemDetails.Detail = $"'{RequestBody.MediaType(c.HttpContext.Request.ContentType)}' is not a type " +
-                    "this endpoint reads; the OpenAPI document (/swagger/v1/swagger.json) lists each operation's types.";
-        });
+        services.AddProblemDetails();
         services.AddExceptionHandler<ProblemExceptionHandler>();
         return services;
     }
@@ -22,6 +17,7 @@ public static class ErrorHandling
     public static void UseSeepageErrorHandling(this WebApplication app)
     {
         app.UseExceptionHandler();
-        app.UseStatusCodePages();
+        app.UseStatusCodePages(async pages =>
+            await ApiProblems.ForStatus(pages.HttpContext).ExecuteAsync(pages.HttpContext));
     }
 }

@@ -25,7 +25,7 @@ public static class OpenApiSetup
                 string path = Path.Combine(AppContext.BaseDirectory, name);
                 if (File.Exists(path)) o.IncludeXmlComments(path);
             }
-            o.OperationFilter<SectionExampleFilter>();
+            o.OperationFilter<OpenApi.SectionExampleFilter>();
             // A client generator must be able to trust the document: nullability from the C# annotations
             // (a nullable reference wraps its $ref in allOf), required lists, every response's content types,
             // every parameter described.
@@ -36,13 +36,18 @@ public static class OpenApiSetup
             o.SchemaFilter<OpenApi.ContractSchemaFilter>();
             o.OperationFilter<OpenApi.ContentTypeFilter>();
             o.OperationFilter<OpenApi.ParameterFilter>();
+            o.SchemaFilter<OpenApi.SectionEnumerationFilter>();
         });
         return services;
     }
 
+    /// <summary>Configuration key: whether the Swagger UI is served at /swagger (default true, for the quick start; set
+    /// <c>OpenApi__SwaggerUi=false</c> in production). The OpenAPI document itself is always served.</summary>
+    public const string SwaggerUiKey = "OpenApi:SwaggerUi";
+
     public static void UseSeepageOpenApi(this WebApplication app)
     {
         app.UseSwagger();
-        app.UseSwaggerUI(o => o.DocumentTitle = "Seepage API");
+        if (app.Configuration.GetValue(SwaggerUiKey, true)) app.UseSwaggerUI(o => o.DocumentTitle = "Seepage API");
     }
 }

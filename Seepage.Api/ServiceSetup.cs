@@ -1,4 +1,5 @@
 using Seepage.Api.Endpoints;
+using Seepage.Api.Jobs;
 using Seepage.Api.Storage;
 
 namespace Seepage.Api;
@@ -7,16 +8,23 @@ namespace Seepage.Api;
 public static class ServiceSetup
 {
     /// <summary>Configuration key of the SQLite database file. Default: data/seepage.db under the content root.</summary>
-    public const string DatabasePathKey = "Storage:DatabasePath";
+    public const string DatabasePathKey = StorageSetup.DatabasePathKey;
 
     public static IServiceCollection AddSeepageServices(this IServiceCollection services, IConfiguration configuration,
         IWebHostEnvironment environment)
     {
-        string path = configuration[DatabasePathKey] ?? Path.Combine(environment.ContentRootPath, "data", "seepage.db");
-        services.AddSingleton(new AnalysisStore(path));
+        var db = services.AddSeepageStorage(configuration, environment);
+        services.AddSeepageJobs(configuration, db);
+        services.AddSeepageHealth();
         services.AddSingleton<AnalysisService>();
-        services.AddSingleton(new StudyStore(path));
         services.AddSingleton<StudyService>();
+        // Target searches and uncertainty studies are still kept in an SQLite file of their own (also when the analyses are
+        // in PostgreSQL) until they move onto the store abstraction.
+        services.AddSingleton(new DesignRunStore(configuration[StorageSetup.DatabasePathKey]
+            ?? Path.Combine(environment.ContentRootPath, "data", "seepage.db")));
+        services.AddSingleton<RunningJobs>();
+        services.AddSingleton<TargetSearchService>();
+        services.AddSingleton<UncertaintyService>();
         services.AddSingleton<ExampleCatalog>();
         services.AddSeepageErrorHandling();
         services.ConfigureHttpJsonOptions(o => o.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);

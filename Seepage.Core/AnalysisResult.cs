@@ -35,6 +35,18 @@ public sealed record AnalysisResult(
     /// <summary>The lateral-boundary truncation check (null when not run).</summary>
     public TruncationResult? Truncation { get; init; }
 
+    /// <summary>How the phreatic surface was found (null for a confined section).</summary>
+    public Unconfined.UnconfinedReport? Unconfined { get; init; }
+
+    /// <summary>The phreatic surface (p = 0) polylines, m, upstream first; empty for a confined section.</summary>
+    public IReadOnlyList<PhreaticLine> PhreaticSurface { get; init; } = [];
+
+    /// <summary>Flow out of each seepage face, its exit point and wetted length; empty for a confined section.</summary>
+    public IReadOnlyList<SeepageFaceResult> SeepageFaces { get; init; } = [];
+
+    /// <summary>The hand methods for a homogeneous embankment beside the FE (null when none applies).</summary>
+    public EmbankmentHandMethods? HandMethods { get; init; }
+
     /// <summary>The caution every report carries.</summary>
     public const string Caution =
         "These results depend on the idealised section and the soil data given. They support, and never replace, " +

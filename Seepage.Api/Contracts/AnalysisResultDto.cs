@@ -18,7 +18,26 @@ public sealed record AnalysisResultDto(
     IndependentVariablesDto? IndependentVariables = null,
     IReadOnlyList<GaugeDto>? Gauges = null,
     ConvergenceDto? Convergence = null,
-    TruncationDto? Truncation = null);
+    TruncationDto? Truncation = null,
+    IReadOnlyList<CheckDto>? Checks = null,
+    bool? Pass = null,
+    IReadOnlyList<string>? PassCovers = null,
+    System.Text.Json.Nodes.JsonNode? AnalysedSection = null,
+    IReadOnlyList<AssumptionDto>? Assumptions = null,
+    IReadOnlyList<PhreaticLineDto>? PhreaticSurface = null,
+    IReadOnlyList<SeepageFaceDto>? SeepageFaces = null,
+    UnconfinedDto? Unconfined = null,
+    HandMethodsDto? HandMethods = null);
+
+
+/// <summary>One check and its verdict (<c>pass</c> true/false, null without one), or <c>skipped</c>: why it did not run or
+/// gave no verdict. The result's <c>pass</c> is false when any verdict fails, true when all pass, and covers the checks
+/// listed in <c>passCovers</c> (those of exit, heave, lane, bligh that gave a verdict).</summary>
+public sealed record CheckDto(string Check, bool? Pass, string? Skipped);
+
+/// <summary>A value the analysis used: the member (JSON pointer), the value in <c>unit</c>, <c>origin</c> "given" or
+/// "default", and a note.</summary>
+public sealed record AssumptionDto(string Member, System.Text.Json.Nodes.JsonNode? Value, string Unit, string Origin, string Note);
 
 /// <summary>Seepage discharge per metre of structure. <c>perMetre</c>, <c>inflow</c>, <c>outflow</c> in m³/s per m;
 /// <c>balance</c> = (inflow − outflow) / inflow, dimensionless;
@@ -27,7 +46,7 @@ public sealed record FlowDto(double PerMetre, string Unit, double Inflow, double
     double PerMetrePerDay, double LitresPerMinutePerMetre, IReadOnlyList<BoundaryFlowDto> Boundaries,
     double? StructureLength = null, double? Total = null, double? TotalPerDay = null);
 
-/// <summary>Flow through one head or drain boundary, m³/s per m, positive into the soil.</summary>
+/// <summary>Flow through one head, drain or seepage-face boundary (<c>kind</c>), m³/s per m, positive into the soil.</summary>
 public sealed record BoundaryFlowDto(string Name, string Kind, double Flow);
 
 /// <summary>Uplift under one structure: stations (x, y in m, total head in m, pore pressure in kPa),
@@ -56,12 +75,14 @@ public sealed record ExitProfilePointDto(double X, double Gradient, double RowGr
 /// <c>effectiveWeight</c> W′ = γ′·D·D/2 and <c>prismUpliftForce</c> U = γw·h_a·D/2 in kN/m, the water force on the
 /// prism (not the uplift of a structure, which is <c>uplift[].force</c>). <c>upliftForce</c> is the same U under its
 /// former name, kept readable for a deprecation period; read <c>prismUpliftForce</c>.</summary>
+/// <remarks><c>skipped</c>: why the factor is not a heave verdict (a prism under a structure is not at an exit).</remarks>
 public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor, bool? Pass,
     double? EffectiveWeight = null,
     [property: Obsolete("The water force on the heave prism is prismUpliftForce; upliftForce is kept for a deprecation period.")]
     double UpliftForce = 0,
     double[]? Prism = null,
-    double? PrismUpliftForce = null)
+    double? PrismUpliftForce = null,
+    string? Skipped = null)
 {
     /// <summary>U = γw·h_a·D/2 on the prism, kN/m. A result stored before the name existed reads its upliftForce.</summary>
     public double? PrismUpliftForce { get; init; } = PrismUpliftForce ?? UpliftForce;
@@ -70,7 +91,8 @@ public sealed record HeaveDto(string Cutoff, double Depth, double AverageExcessH
 /// <summary>Hand creep checks beside the FE results (lengths in m, ratios dimensionless).</summary>
 public sealed record CreepDto(CreepCheckDto Lane, CreepCheckDto Bligh);
 
-public sealed record CreepCheckDto(double WeightedLength, double Ratio, double? Required, bool? Pass, string Source);
+/// <summary>A creep check: length in m, ratio, required ratio from the cited table; <c>skipped</c> says why there is none.</summary>
+public sealed record CreepCheckDto(double WeightedLength, double Ratio, double? Required, bool? Pass, string Source, string? Skipped = null);
 
 /// <summary>Mesh statistics: counts, angles in degrees, mesh time in seconds.</summary>
 public sealed record MeshStatsDto(int Nodes, int Triangles, double MinAngle, double MaxAngle, int[] MinAngleHistogram, double Seconds);
@@ -91,6 +113,7 @@ public sealed record ConvergenceDto(int[] Triangles, IReadOnlyList<ConvergenceFi
 public sealed record ConvergenceFigureDto(string Name, string Unit, double[] Values, double? ObservedOrder, double? Extrapolated, double EstimatedError);
 
 /// <summary>Truncation check: lateral boundaries (x, m) before and after pushing them out, the flows (m³/s per m)
-/// and the relative change.</summary>
+/// and the relative change; <c>method</c> says how: <c>sensitivity</c> (first-order estimate from the one solution, an
+/// upper bound; extendedFlow = flow × (1 + change)) or <c>widerSolve</c> (the wider section meshed and solved).</summary>
 public sealed record TruncationDto(double LeftX, double RightX, double ExtendedLeftX, double ExtendedRightX, double Flow,
-    double ExtendedFlow, double Change);
+    double ExtendedFlow, double Change, string Method);

@@ -7,7 +7,9 @@ namespace Seepage.Api.Contracts;
 /// head gradient [∂h/∂x, ∂h/∂y] (dimensionless) and the Darcy velocity [vx, vy] = −K∇h (m/s) at its centroid.
 /// <c>zoneSoils</c> names the soil of each zone index: the section's zones first, then any pieces a permeable wall
 /// split off them and the walls themselves. <c>waterUnitWeight</c> (kN/m³) is the unit weight of water the analysis
-/// used (the section's, or its default), for pore pressures u = γw(h − y) under the cursor.
+/// used (the section's, or its default), for pore pressures u = γw(h − y) under the cursor. <c>unconfined</c>
+/// (unconfined sections only): pressure heads, the saturated part of the mesh and the phreatic surface; the flow net
+/// is then drawn in the saturated triangles only.
 /// </summary>
 public sealed record FieldDto(
     string Id,
@@ -22,7 +24,8 @@ public sealed record FieldDto(
     double[][] Gradients,
     double[][] Velocities,
     IReadOnlyList<string>? ZoneSoils = null,
-    double? WaterUnitWeight = null);
+    double? WaterUnitWeight = null,
+    UnconfinedFieldDto? Unconfined = null);
 
 /// <summary>One equipotential: its total head in m and the polylines where the field takes it.</summary>
 public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Paths);
@@ -31,5 +34,12 @@ public sealed record EquipotentialDto(double Head, IReadOnlyList<double[][]> Pat
 /// between it and the first flow line.</summary>
 public sealed record FlowLineDto(double Fraction, double[][] Points);
 
-/// <summary>Flow-net counts: Nf flow channels, Nd head drops, shape factor Nf/Nd, so q ≈ k·H·Nf/Nd.</summary>
-public sealed record FlowNetDto(int FlowChannels, int HeadDrops, double ShapeFactor, double HeadDifference);
+/// <summary>Flow-net counts: <c>flowChannels</c> whole channels drawn (the last may be a part channel),
+/// <c>flowChannelsExact</c> Nf with its fraction, Nd head drops (<c>headDropsSource</c>: "automatic" for square
+/// cells and at least four channels, or "section" from <c>flowNet.headDrops</c>), shape factor
+/// q/(k·H) = Nf/Nd with k = <c>referenceConductivity</c> = √(kx·ky) of <c>referenceSoil</c> (m/s), H the head
+/// difference (m). <c>uniformIsotropic</c> false means q = k·H·Nf/Nd holds only approximately for the drawn net
+/// (layered or anisotropic section). <c>caption</c> says all this in words (the page and the memo show it).</summary>
+public sealed record FlowNetDto(int FlowChannels, int HeadDrops, double ShapeFactor, double HeadDifference,
+    double FlowChannelsExact = 0, string? HeadDropsSource = null, double ReferenceConductivity = 0,
+    string? ReferenceSoil = null, bool UniformIsotropic = false, string? Caption = null);

@@ -1,4 +1,7 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
 using Seepage.Core;
+using Seepage.Core.Sections;
 using Seepage.Core.Geometry;
 using Seepage.Core.Results;
 
@@ -9,6 +12,8 @@ public static class ResultMapper
 {
     public static AnalysisResultDto ToDto(string id, DateTimeOffset createdAt, AnalysisResult r)
     {
+        var checks = CheckSummary.Of(r);
+        var (pass, covers) = CheckSummary.Overall(checks);
         var f = r.Flow;
         var flow = new FlowDto(f.PerMetre, "m³/s per m", f.Inflow, f.Outflow, f.Balance, f.PerMetre * 86_400, f.PerMetre * 60_000,
             f.Boundaries.Select(b => new BoundaryFlowDto(b.Name, b.Kind, b.Flow)).ToList(),
@@ -23,7 +28,7 @@ public static class ResultMapper
                 e.RowGradientAtMax, e.MaxRowGradient, [e.MaxRowX, e.MaxRowY], e.AllowableGradient)
             : null;
         var heave = r.Heave.Select(h => new HeaveDto(h.Cutoff, h.Depth, h.AverageExcessHead, h.Factor, h.RequiredFactor, h.Pass,
-            h.EffectiveWeight, h.PrismUpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY])).ToList();
+            h.EffectiveWeight, h.PrismUpliftForce, [h.PrismFromX, h.PrismToX, h.SurfaceY], Skipped: h.Skipped)).ToList();
         CreepDto? creep = r.Creep is { } c ? new CreepDto(Creep(c.Lane), Creep(c.Bligh)) : null;
         var q = r.Mesh.Quality;
         var mesh = new MeshStatsDto(q.Nodes, q.Triangles, q.MinAngle, q.MaxAngle, q.MinAngleHistogram, q.Seconds);
@@ -34,7 +39,27 @@ public static class ResultMapper
             r.Gauges.Select(g => new GaugeDto(g.Name, g.Flow, g.Length, g.Method, g.LineIntegral)).ToList(),
             r.Convergence is { } cv ? new ConvergenceDto(cv.Triangles, cv.Figures.Select(x =>
                 new ConvergenceFigureDto(x.Name, x.Unit, x.Values, x.ObservedOrder, x.Extrapolated, x.EstimatedError)).ToList()) : null,
-            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change) : null);
+            r.Truncation is { } tr ? new TruncationDto(tr.LeftX, tr.RightX, tr.ExtendedLeftX, tr.ExtendedRightX, tr.Flow, tr.ExtendedFlow, tr.Change,
+                tr.Method) : null,
+            PhreaticSurface: r.PhreaticSurface.Select(l => new PhreaticLineDto(Line(l.Points))).ToList(),
+            SeepageFaces: r.SeepageFaces.Select(x => new SeepageFaceDto(x.Name, x.Flow, Pair(x.ExitPoint), x.WettedLength)).ToList(),
+            Unconfined: r.Unconfined is { } u ? new UnconfinedDto(u.Iterations, u.Method, u.Change, u.Band, u.Floor, u.LinearIterations, u.Seconds) : null,
+            HandMethods: r.HandMethods is { } hm ? new HandMethodsDto(hm.ReservoirDepth, hm.Estimates.Select(x =>
+                new HandEstimateDto(x.Method, x.Source, x.Applies, x.Note, x.Flow, Pair(x.ExitPoint), x.Difference)).ToList()) : null)
+            with { Checks = checks.Select(c => new CheckDto(c.Check, c.Pass, c.Skipped)).ToList(), Pass = pass, PassCovers = covers,
+                AnalysedSection = r.Section.Analysed is { } a ? JsonNode.Parse(SectionParser.Write(a)) : null,
+                Assumptions = r.Section.Assumptions.Select(x => new AssumptionDto(x.Member, JsonSerializer.SerializeToNode(x.Value), x.Unit,
+                    x.Origin, x.Note)).ToList() };
+    }
+
+    private static double[]? Pair(Point2? p) => p is { } v ? [Math.Round(v.X, 5), Math.Round(v.Y, 5)] : null;
+
+    private static UnconfinedFieldDto? UnconfinedField(AnalysisResult r)
+    {
+        if (r.Unconfined is null || r.Field.ElementFactors is not { } kr) return null;
+        var p = Seepage.Core.Results.PhreaticSurfaceTracer.PressureHead(r.Mesh, r.Field.Heads);
+        return new UnconfinedFieldDto(p.Select(v => Math.Round(v, 6)).ToArray(), kr.Select(Significant).ToArray(),
+            r.PhreaticSurface.Select(l => Line(l.Points)).ToList());
     }
 
     public static FieldDto ToFieldDto(string id, AnalysisResult r)
@@ -47,7 +72,10 @@ public static class ResultMapper
         var net = r.FlowNet;
         var equipotentials = net?.Equipotentials.Select(e => new EquipotentialDto(e.Head, e.Paths.Select(Line).ToList())).ToList() ?? [];
         var flowLines = net?.FlowLines.SelectMany(l => l.Paths.Select(p => new FlowLineDto(l.Fraction, Line(p)))).ToList() ?? [];
-        var counts = new FlowNetDto(net?.FlowChannels ?? 0, net?.HeadDrops ?? 0, net?.ShapeFactor ?? 0, net?.HeadDifference ?? 0);
+        var counts = net is null ? new FlowNetDto(0, 0, 0, 0)
+            : new FlowNetDto(net.FlowChannels, net.HeadDrops, net.ShapeFactor, net.HeadDifference, net.FlowChannelsExact,
+                net.HeadDropsSource, net.ReferenceConductivity, net.ReferenceSoil, net.UniformIsotropic);
+        counts = counts with { Caption = Reports.FlowNetCaption.Of(counts) };
         var walls = r.Section.Cutoffs.Select(c => Line([c.Top, c.Tip]))
             .Concat(r.Section.Structures.Select(s => Line(s.Base))).ToList();
         var gradients = new double[m.TriangleCount][];
@@ -62,7 +90,7 @@ public static class ResultMapper
         return new FieldDto(id, nodes, triangles, m.Zones, r.Field.Heads.Take(m.NodeCount).Select(h => Math.Round(h, 6)).ToArray(),
             equipotentials, flowLines, counts, walls, gradients, velocities,
             r.Section.Zones.Select(z => r.Section.Soils[z.Soil].Id).ToList(),
-            WaterUnitWeight: r.Section.WaterUnitWeight);
+            WaterUnitWeight: r.Section.WaterUnitWeight, Unconfined: UnconfinedField(r));
     }
 
     private static IndependentVariablesDto? Independent(IndependentVariableResult? v) => v is null ? null :
@@ -80,7 +108,7 @@ public static class ResultMapper
         return digits > 15 ? v : Math.Round(v, Math.Max(digits, 0));
     }
 
-    private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source);
+    private static CreepCheckDto Creep(CreepCheck c) => new(c.WeightedLength, c.Ratio, c.Required, c.Pass, c.Source, c.Skipped);
 
     private static double[][] Line(IReadOnlyList<Point2> points) =>
         points.Select(p => new[] { Math.Round(p.X, 5), Math.Round(p.Y, 5) }).ToArray();

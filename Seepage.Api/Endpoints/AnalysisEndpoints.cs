@@ -1,4 +1,7 @@
+using Microsoft.Extensions.Options;
+using Seepage.Api.Admission;
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Storage;
 using Seepage.Api.Errors;
@@ -23,7 +26,8 @@ public static class AnalysisEndpoints
             .Accepts<SectionDocument>("application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType)
-            .ProducesProblem(StatusCodes.Status422UnprocessableEntity);
+            .ProducesProblem(StatusCodes.Status422UnprocessableEntity)
+            .ProducesProblem(StatusCodes.Status429TooManyRequests);
         group.MapGet("/{id}", Get)
             .WithName("GetAnalysis")
             .WithSummary("Read a stored analysis")
@@ -48,26 +52,32 @@ public static class AnalysisEndpoints
     }
 
     public static async Task<Results<Created<AnalysisResultDto>, ValidationProblem, ProblemHttpResult>> Create(
-        HttpRequest request, AnalysisService service, CancellationToken cancellation)
+        HttpRequest request, AnalysisService service, AnalysisGate gate, IOptions<ServiceLimits> limits, CancellationToken cancellation)
     {
         var body = await SectionBody.ReadAsync(request, cancellation);
         if (body.Refusal is { } refused) return refused;
         if (body.Invalid is { } invalid) return invalid;
+        using var ticket = await gate.EnterAsync(body.Model!, cancellation);
+        if (ticket is null)
+            return AdmissionSetup.TooBusy(request.HttpContext, limits.Value.RetryAfterSeconds,
+                $"{gate.Admitted} large analyses are running or waiting, the most this server takes; " +
+                $"retry after {limits.Value.RetryAfterSeconds} s.");
+        // A section that cannot be meshed or solved escapes to the one exception handler (ProblemExceptionHandler).
         var dto = await service.RunAsync(body.Model!, body.Json!, cancellation);
         return TypedResults.Created($"/api/v1/analyses/{dto.Id}", dto);
     }
 
     public static async Task<Results<Ok<AnalysisResultDto>, ProblemHttpResult>> Get(string id, AnalysisService service,
         CancellationToken cancellation) =>
-        await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } dto
+        await service.GetResultAsync(id, cancellation) is { } dto
             ? TypedResults.Ok(dto) : NotFound(id);
 
     public static async Task<Results<Ok<FieldDto>, ProblemHttpResult>> GetField(string id, AnalysisService service,
         CancellationToken cancellation) =>
-        await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation) is { } dto
+        await service.GetFieldAsync(id, cancellation) is { } dto
             ? TypedResults.Ok(dto) : NotFound(id);
 
-    public static async Task<Results<ContentHttpResult, ProblemHttpResult>> GetSection(string id, AnalysisStore store,
+    public static async Task<Results<ContentHttpResult, ProblemHttpResult>> GetSection(string id, IAnalysisStore store,
         CancellationToken cancellation) =>
         await store.GetJsonAsync(id, AnalysisPart.Section, cancellation) is { } json
             ? TypedResults.Content(json, "application/json") : NotFound(id);

@@ -1,3 +1,4 @@
+using Microsoft.Extensions.Options;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Seepage.Api.Errors;
 using Seepage.Core.Imports;
@@ -18,7 +19,7 @@ public static class ImportEndpoints
                 "(section, soils, zone vertices, structures, cutoffs, heads, drains, checks, mesh; see the templates) and validates it. " +
                 "Answers 200 with the section document, ready to post to /api/v1/analyses, or 400 problem details whose errors are " +
                 "keyed by the cell concerned, e.g. \"sheet 'soils' row 4 column B\".")
-            .Accepts<string>(RequestBody.Csv, RequestBody.Xlsx, RequestBody.Multipart)
+            .Accepts<string>(RequestBody.Csv, RequestBody.Xlsx, RequestBody.Multipart, "application/csv", "text/plain")
             .Produces<SectionDocument>(StatusCodes.Status200OK, "application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
@@ -36,9 +37,9 @@ public static class ImportEndpoints
     }
 
     public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> Import(HttpRequest request,
-        CancellationToken cancellation)
+        IOptions<ServiceLimits> limits, CancellationToken cancellation)
     {
-        var body = await SpreadsheetBody.ReadAsync(request, cancellation);
+        var body = await SpreadsheetBody.ReadAsync(request, limits.Value.Spreadsheets, cancellation);
         if (body.Refusal is { } refused) return refused;
         var import = body.Import!;
         if (import.Document is null) return Invalid(import.Problems, "The spreadsheet has cells that could not be read.");

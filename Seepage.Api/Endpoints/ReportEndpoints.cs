@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Errors;
 using Seepage.Api.OpenApi;
@@ -21,27 +22,32 @@ public static class ReportEndpoints
             .WithSummary("Design memo of an analysis (HTML, or PDF with ?format=pdf)")
             .WithDescription("A printable memo: caution, inputs (soils with units, geometry figure, heads), flow net, uplift diagram, exit " +
                 "gradient profile with the allowable line, the figures-and-checks table (achieved and required factors, pass/fail), methods " +
-                "and sources, mesh and solver statistics. Vector figures (inline SVG; PDF drawing). Built from the stored analysis.")
+                "and sources, mesh and solver statistics. Vector figures (inline SVG; PDF drawing). Built from the stored analysis. ?units=us " +
+                "writes every figure in US customary units (ft, ft/day, psf, kip/ft, pcf, ft³/day and gal/min per ft); default si.")
             .Produces<string>(StatusCodes.Status200OK, "text/html")
             .Produces<byte[]>(StatusCodes.Status200OK, Pdf)
             .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status404NotFound)
             .ProducesProblem(StatusCodes.Status503ServiceUnavailable)
-            .WithMetadata(QueryChoice.ReportFormat, ParameterNote.AnalysisId);
+            .WithMetadata(QueryChoice.ReportFormat, QueryChoice.Units, ParameterNote.AnalysisId);
         analyses.MapGet("/{id}/uplift.csv", UpliftCsv)
             .WithName("GetUpliftCsv")
             .WithSummary("Uplift stations as CSV")
-            .WithDescription("structure, x (m), y (m), total head (m), pore pressure (kPa), one row per station of every structure base.")
+            .WithDescription("structure, x (m), y (m), total head (m), pore pressure (kPa), one row per station of every structure base; " +
+                "?units=us gives ft and psf. The last line is the caution.")
             .Produces<string>(StatusCodes.Status200OK, "text/csv")
+            .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status404NotFound)
-            .WithMetadata(ParameterNote.AnalysisId);
+            .WithMetadata(QueryChoice.Units, ParameterNote.AnalysisId);
         analyses.MapGet("/{id}/exit.csv", ExitCsv)
             .WithName("GetExitCsv")
             .WithSummary("Exit gradient profile as CSV")
-            .WithDescription("x (m), averaged upward exit gradient, allowable gradient i_c/F, one row per station of the exit surface.")
+            .WithDescription("x (m), averaged upward exit gradient, allowable gradient i_c/F, one row per station of the exit surface; " +
+                "?units=us gives x in ft. The last line is the caution.")
             .Produces<string>(StatusCodes.Status200OK, "text/csv")
+            .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status404NotFound)
-            .WithMetadata(ParameterNote.AnalysisId);
+            .WithMetadata(QueryChoice.Units, ParameterNote.AnalysisId);
         app.MapGroup("/api/v1/studies").WithTags("Reports").MapGet("/{id}/report", StudyReport)
             .WithName("GetStudyReport")
             .WithSummary("Comparison memo of a study (HTML, or PDF with ?format=pdf)")
@@ -56,21 +62,27 @@ public static class ReportEndpoints
         return app;
     }
 
-    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult>> AnalysisReport(string id, string? format,
-        AnalysisService service, AnalysisStore store, CancellationToken cancellation)
+    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult>> AnalysisReport(
+        string id, string? format, string? units, AnalysisService service, IAnalysisStore store,
+        CancellationToken cancellation)
     {
         var (chosen, badFormat) = QueryChoice.ReportFormat.Read(format);
         if (badFormat is not null) return badFormat;
-        var result = await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation);
-        var field = await service.GetAsync<FieldDto>(id, AnalysisPart.Field, cancellation);
+        var (system, badUnits) = QueryChoice.Units.Read(units);
+        if (badUnits is not null) return badUnits;
+        var result = await service.GetResultAsync(id, cancellation);
+        var field = await service.GetFieldAsync(id, cancellation);
         var sectionJson = await store.GetJsonAsync(id, AnalysisPart.Section, cancellation);
         if (result is null || field is null || sectionJson is null) return NotFound("analysis", id);
-        var section = SectionParser.Parse(sectionJson, out _) ?? new SectionDocument();
-        return Render(AnalysisReportBuilder.Build(result, field, section, DateTimeOffset.UtcNow), chosen, $"seepage-{id}.pdf");
+        // The memo is written from the section in SI (a section posted in ft and pcf is converted as the analysis was).
+        var section = SectionUnits.ToSi(SectionParser.Parse(sectionJson, out _) ?? new SectionDocument(), []);
+        var report = AnalysisReportBuilder.Build(result, field, section, DateTimeOffset.UtcNow,
+            PresentationUnits.Parse(system)!);
+        return Render(report, chosen, $"seepage-{id}.pdf");
     }
 
-    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult>> StudyReport(string id, string? format,
-        string? figure, StudyService service, CancellationToken cancellation)
+    public static async Task<Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult>> StudyReport(
+        string id, string? format, string? figure, StudyService service, CancellationToken cancellation)
     {
         var (chosen, badFormat) = QueryChoice.ReportFormat.Read(format);
         if (badFormat is not null) return badFormat;
@@ -80,15 +92,26 @@ public static class ReportEndpoints
         return Render(StudyReportBuilder.Build(study, chart, DateTimeOffset.UtcNow), chosen, $"seepage-{id}.pdf");
     }
 
-    public static async Task<Results<ContentHttpResult, ProblemHttpResult>> UpliftCsv(string id, AnalysisService service, CancellationToken cancellation) =>
-        await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
-            ? TypedResults.Content(StationCsv.Uplift(r), Csv) : NotFound("analysis", id);
+    public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> UpliftCsv(string id,
+        string? units, AnalysisService service, CancellationToken cancellation)
+    {
+        var (system, badUnits) = QueryChoice.Units.Read(units);
+        if (badUnits is not null) return badUnits;
+        return await service.GetResultAsync(id, cancellation) is { } r
+            ? TypedResults.Content(StationCsv.Uplift(r, PresentationUnits.Parse(system)!), Csv) : NotFound("analysis", id);
+    }
 
-    public static async Task<Results<ContentHttpResult, ProblemHttpResult>> ExitCsv(string id, AnalysisService service, CancellationToken cancellation) =>
-        await service.GetAsync<AnalysisResultDto>(id, AnalysisPart.Result, cancellation) is { } r
-            ? TypedResults.Content(StationCsv.Exit(r), Csv) : NotFound("analysis", id);
+    public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> ExitCsv(string id,
+        string? units, AnalysisService service, CancellationToken cancellation)
+    {
+        var (system, badUnits) = QueryChoice.Units.Read(units);
+        if (badUnits is not null) return badUnits;
+        return await service.GetResultAsync(id, cancellation) is { } r
+            ? TypedResults.Content(StationCsv.Exit(r, PresentationUnits.Parse(system)!), Csv) : NotFound("analysis", id);
+    }
 
-    private static Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult> Render(
+    /// <summary>The memo as HTML, or as PDF for <paramref name="format"/> <c>pdf</c> (503 when no font is installed).</summary>
+    internal static Results<ContentHttpResult, FileContentHttpResult, ValidationProblem, ProblemHttpResult> Render(
         ReportDocument report, string format, string fileName)
     {
         if (format != "pdf") return TypedResults.Content(HtmlReportWriter.Write(report), Html);

@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.Extensions.Options;
 using Seepage.Api.Errors;
 using Seepage.Core.Sections;
 
@@ -32,6 +33,10 @@ public static class SectionBody
         var document = SectionParser.Parse(json, out var parseProblems);
         if (document is null) return new Outcome(null, json, parseProblems, null);
         var outcome = SectionValidator.Validate(document);
+        // Work over the server's budget is refused like any other problem, before anything starts.
+        var limits = request.HttpContext.RequestServices.GetService<IOptions<ServiceLimits>>()?.Value;
+        if (outcome.Model is { } model && limits?.OverBudget(model) is { } overBudget)
+            return new Outcome(null, json, [overBudget], null);
         return new Outcome(outcome.Model, json, outcome.Problems, null);
     }
 }

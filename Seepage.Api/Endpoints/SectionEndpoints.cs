@@ -14,7 +14,7 @@ public static class SectionEndpoints
             .WithName("ValidateSection")
             .WithSummary("Check a section document")
             .WithDescription("Parses and validates the posted section document without meshing or solving it. Answers 200 with any " +
-                "warnings, or 400 problem details listing every problem under the JSON pointer of the member concerned.")
+                "warnings and an estimate of the analysis size (triangles, unknowns, the largest solve), or 400 problem details listing every problem under the JSON pointer of the member concerned.")
             .Accepts<SectionDocument>("application/json")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
@@ -27,6 +27,9 @@ public static class SectionEndpoints
         var body = await SectionBody.ReadAsync(request, cancellation);
         if (body.Refusal is { } refused) return refused;
         if (body.Invalid is { } invalid) return invalid;
-        return TypedResults.Ok(new SectionCheckDto(true, body.Model!.Warnings));
+        var e = SizeEstimate.Of(body.Model!);
+        return TypedResults.Ok(new SectionCheckDto(true, body.Model!.Warnings,
+            new SizeEstimateDto(e.Triangles, e.Unknowns, e.Order, e.ConvergenceCheck, e.LargestSolveUnknowns,
+                Math.Round(e.Multiplier, 2))));
     }
 }

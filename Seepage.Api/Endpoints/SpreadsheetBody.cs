@@ -14,17 +14,24 @@ public static class SpreadsheetBody
     /// <summary>The import, or the problem that refused the body (400, 413, 415).</summary>
     public sealed record Outcome(SheetImport? Import, ProblemHttpResult? Refusal);
 
-    public static async Task<Outcome> ReadAsync(HttpRequest request, CancellationToken cancellation)
+    public static async Task<Outcome> ReadAsync(HttpRequest request, SpreadsheetLimits limits, CancellationToken cancellation)
     {
         const string what = "Spreadsheets";
         if (!request.HasFormContentType)
         {
             var body = await RequestBody.ReadAsync(request, what, Accepted, cancellation);
             if (body.Refusal is { } refusal) return new(null, refusal);
-            return Read(body.Bytes, body.MediaType);
+            return await ReadAsync(body.Bytes, body.MediaType, limits, cancellation);
         }
         if (request.ContentLength > RequestBody.MaxBytes) return new(null, ApiProblems.TooLarge(what));
-        var form = await request.ReadFormAsync(cancellation);
+        IFormCollection form;
+        try { form = await request.ReadFormAsync(cancellation); }
+        catch (Exception ex) when (ex is InvalidDataException or IOException)
+        {
+            // A malformed or truncated multipart body (missing boundary, cut-off part, a part over the form limits).
+            return new(null, ex.Message.Contains("limit", StringComparison.OrdinalIgnoreCase) ? ApiProblems.TooLarge(what)
+                : ApiProblems.Unreadable("The multipart form could not be read: " + Core.SafeText.Of(ex.Message, 200)));
+        }
         var file = form.Files.FirstOrDefault();
         if (file is null)
             return new(null, ApiProblems.Unreadable(
@@ -38,18 +45,21 @@ public static class SpreadsheetBody
                 [".csv or .xlsx file in the form", RequestBody.Csv, RequestBody.Xlsx]));
         await using var source = file.OpenReadStream();
         var bytes = await RequestBody.ReadBoundedAsync(source, cancellation);
-        return bytes is null ? new(null, ApiProblems.TooLarge(what)) : Read(bytes, type);
+        return bytes is null ? new(null, ApiProblems.TooLarge(what)) : await ReadAsync(bytes, type, limits, cancellation);
     }
 
-    private static Outcome Read(byte[] bytes, string type)
+    private static async Task<Outcome> ReadAsync(byte[] bytes, string type, SpreadsheetLimits limits,
+        CancellationToken cancellation)
     {
         if (bytes.Length == 0) return new(null, ApiProblems.Unreadable("The body is empty; send a spreadsheet."));
         if (type == RequestBody.Csv)
-            return new(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes)), null);
+            return new(SectionSpreadsheet.ReadCsv(System.Text.Encoding.UTF8.GetString(bytes), limits), null);
         try
         {
-            using var workbook = new MemoryStream(bytes);
-            return new(SectionSpreadsheet.ReadXlsx(workbook), null);
+            // Unpacking and parsing are CPU work: off the request thread, and stopped when the client leaves.
+            var import = await Task.Run(() => SectionSpreadsheet.ReadXlsx(new MemoryStream(bytes), limits, cancellation),
+                cancellation);
+            return new(import, null);
         }
         catch (InvalidDataException ex)
         {

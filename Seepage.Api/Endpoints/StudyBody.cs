@@ -1,6 +1,7 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Errors;
 using Seepage.Api.Storage;
 using Seepage.Core.Imports;
@@ -17,7 +18,7 @@ public static class StudyBody
     public sealed record Outcome(JsonObject? Base, IReadOnlyList<StudyAlternative> Alternatives,
         Dictionary<string, string[]> Errors, ProblemHttpResult? Refusal = null);
 
-    public static async Task<Outcome> ReadAsync(HttpRequest request, string? baseName, AnalysisStore store, ExampleCatalog catalog,
+    public static async Task<Outcome> ReadAsync(HttpRequest request, string? baseName, IAnalysisStore store, ExampleCatalog catalog,
         CancellationToken cancellation)
     {
         var read = await RequestBody.ReadAsync(request, "Studies", [RequestBody.Json, RequestBody.Csv], cancellation);
@@ -39,8 +40,17 @@ public static class StudyBody
             return Finish(baseSection, alternatives, errors);
         }
         JsonNode? root;
-        try { root = JsonNode.Parse(body, documentOptions: new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true }); }
-        catch (JsonException ex) { errors[""] = ["Malformed JSON: " + ex.Message]; return new Outcome(null, [], errors); }
+        var options = new JsonDocumentOptions { MaxDepth = 32, AllowTrailingCommas = true, AllowDuplicateProperties = false };
+        try { root = JsonNode.Parse(body, documentOptions: options); }
+        catch (JsonException ex)
+        {
+            // A member given twice (which one would win?) or broken syntax, keyed by where the reader stopped.
+            string? twice = DuplicateMemberFinder.Find(body);
+            errors[twice ?? SectionParser.ToPointer(ex.Path)] = [twice is null
+                ? $"is not valid JSON at line {ex.LineNumber + 1}, character {ex.BytePositionInLine + 1}: {ex.Message.Split(" LineNumber:")[0].Trim()}"
+                : "is given twice in its object; give each member once (which one should count?)."];
+            return new Outcome(null, [], errors);
+        }
         if (root is not JsonObject obj) { errors[""] = ["A study is a JSON object { \"base\": <section>, \"alternatives\": [...] }."]; return new Outcome(null, [], errors); }
         JsonObject? section = obj["base"] is JsonObject b ? CheckBase(b.ToJsonString(), "/base", errors) : null;
         if (obj["base"] is not JsonObject) errors["/base"] = ["must be the base section document (a JSON object)."];
@@ -54,6 +64,9 @@ public static class StudyBody
                     errors[$"/alternatives/{i}/changes"] = ["must be an object of JSON pointer → value, e.g. { \"/heads/0/total\": 7.5 }."];
                     continue;
                 }
+                foreach (var change in changes)
+                    if (SectionContract.CheckPointer(change.Key) is { } why)
+                        errors[$"/alternatives/{i}/changes/{change.Key.Replace("~", "~0").Replace("/", "~1")}"] = [$"'{change.Key}' {why}"];
                 string name = (alt["name"] as JsonValue)?.TryGetValue(out string? n) == true && !string.IsNullOrWhiteSpace(n) ? n! : $"alternative {i + 1}";
                 list.Add(new StudyAlternative(name, changes.Select(c => KeyValuePair.Create(c.Key, c.Value?.DeepClone())).ToList()));
             }
@@ -70,7 +83,7 @@ public static class StudyBody
     }
 
     // The base must be a valid section by itself; its problems are keyed under the base's pointer.
-    private static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
+    internal static JsonObject? CheckBase(string json, string prefix, Dictionary<string, string[]> errors)
     {
         var document = SectionParser.Parse(json, out var parseProblems);
         var problems = document is null ? parseProblems : SectionValidator.Validate(document).Problems;

@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Http.HttpResults;
+using Seepage.Api.Application;
 using Seepage.Api.Contracts;
 using Seepage.Api.Errors;
 using Seepage.Api.OpenApi;
@@ -22,7 +23,7 @@ public static class StudyEndpoints
                 "uplift force kN/m, exit gradient and factor, heave factor, pass/fail; an invalid alternative reports its problems); " +
                 "larger ones, or ?background=true, answer 202 at once and GET /api/v1/studies/{id} reports done/total and the rows so " +
                 "far. Rows as CSV with Accept: text/csv or ?format=csv.")
-            .Accepts<StudyRequestDto>("application/json", "text/csv")
+            .Accepts<StudyRequestDto>(RequestBody.Json, RequestBody.Csv, "application/csv")
             .Produces<StudyDto>(StatusCodes.Status201Created)
             .Produces<string>(StatusCodes.Status201Created, "text/csv")
             .Produces<StudyDto>(StatusCodes.Status202Accepted)
@@ -32,7 +33,7 @@ public static class StudyEndpoints
         group.MapGet("/{id}", Get)
             .WithName("GetStudy")
             .WithSummary("Read a study and its progress")
-            .WithDescription("Returns the study: status (running, done, failed, cancelled, interrupted), done/total and the rows finished so far; " +
+            .WithDescription("Returns the study: status (running, done, cancelled), done/total and the rows finished so far; " +
                 "as CSV with Accept: text/csv or ?format=csv.")
             .Produces<StudyDto>(StatusCodes.Status200OK)
             .Produces<string>(StatusCodes.Status200OK, "text/csv")
@@ -42,7 +43,7 @@ public static class StudyEndpoints
     }
 
     public static async Task<Results<Created<StudyDto>, Accepted<StudyDto>, ContentHttpResult, ValidationProblem,
-        ProblemHttpResult>> Create(HttpRequest request, StudyService service, AnalysisStore store, ExampleCatalog catalog,
+        ProblemHttpResult>> Create(HttpRequest request, StudyService service, IAnalysisStore store, ExampleCatalog catalog,
         string? @base, string? background, string? format, CancellationToken cancellation)
     {
         var (wantsCsv, badFormat) = WantsCsv(request, format);

@@ -11,6 +11,10 @@ public sealed record QueryChoice(string Parameter, string Default, IReadOnlyList
     public static readonly QueryChoice ReportFormat = new("format", "html", ["html", "pdf"],
         "Report format: html (printable page, default) or pdf.");
 
+    /// <summary>Units of a memo or CSV table: <c>si</c> (default) or <c>us</c>.</summary>
+    public static readonly QueryChoice Units = new("units", "si", ["si", "us"],
+        "Units of every figure: si (default) or us (ft, ft/day, psf, kip/ft, pcf, ft³/day and gal/min per ft).");
+
     /// <summary>Study answer format: <c>json</c> (default) or <c>csv</c>; <c>Accept: text/csv</c> also gives CSV.</summary>
     public static readonly QueryChoice StudyFormat = new("format", "json", ["json", "csv"],
         "Answer format: json (default) or csv (one row per alternative, units in the header); Accept: text/csv " +
@@ -20,6 +24,12 @@ public sealed record QueryChoice(string Parameter, string Default, IReadOnlyList
     public static readonly QueryChoice Background = new("background", "false", ["false", "true"],
         "true answers 202 at once and runs the study in the background; false (default) waits for studies of " +
         $"up to {Storage.StudyService.WaitLimit} alternatives.");
+
+    /// <summary>Whether a target search or an uncertainty study runs in the background: <c>false</c> (default) or
+    /// <c>true</c>.</summary>
+    public static readonly QueryChoice RunInBackground = new("background", "false", ["false", "true"],
+        "true answers 202 at once and runs the work in the background (GET its id for progress); false (default) " +
+        "waits for the answer (an uncertainty study of many samples runs in the background anyway).");
 
     /// <summary>Which part of the assembled system to export: <c>matrix</c> (default) or <c>rhs</c>.</summary>
     public static readonly QueryChoice SystemPart = new("part", "matrix", ["matrix", "rhs"],

@@ -30,6 +30,12 @@ public sealed class ContentTypeFilter : IOperationFilter
         var declared = context.ApiDescription.ActionDescriptor.EndpointMetadata.OfType<IProducesResponseTypeMetadata>();
         foreach (var d in declared)
         {
+            // 204 No Content has no body to describe (RFC 9110, 15.3.5).
+            if (d.StatusCode == StatusCodes.Status204NoContent)
+            {
+                if (operation.Responses.TryGetValue("204", out var empty) && empty is OpenApiResponse none) none.Content = null;
+                continue;
+            }
             string code = d.StatusCode.ToString(System.Globalization.CultureInfo.InvariantCulture);
             if (!operation.Responses.TryGetValue(code, out var found) || found is not OpenApiResponse response)
             {

@@ -13,8 +13,9 @@ public sealed class ParameterFilter : IOperationFilter
     public void Apply(OpenApiOperation operation, OperationFilterContext context)
     {
         var metadata = context.ApiDescription.ActionDescriptor.EndpointMetadata;
-        var choices = metadata.OfType<QueryChoice>().ToDictionary(c => c.Parameter);
-        var notes = metadata.OfType<ParameterNote>().ToDictionary(n => n.Name);
+        // Group metadata comes before the endpoint's own: the last one for a name is the most specific.
+        var choices = metadata.OfType<QueryChoice>().GroupBy(c => c.Parameter).ToDictionary(g => g.Key, g => g.Last());
+        var notes = metadata.OfType<ParameterNote>().GroupBy(n => n.Name).ToDictionary(g => g.Key, g => g.Last());
         foreach (var parameter in (operation.Parameters ?? []).OfType<OpenApiParameter>())
         {
             string name = parameter.Name ?? "";
@@ -44,6 +45,24 @@ public sealed record ParameterNote(string Name, string Description)
     /// <summary>The id of a stored study.</summary>
     public static readonly ParameterNote StudyId = new("id",
         "Id of a study, as returned by POST /api/v1/studies (the Location header and the study's id).");
+
+    /// <summary>The id of a target search.</summary>
+    public static readonly ParameterNote TargetSearchId = new("id",
+        "Id of a target search, as returned by POST /api/v1/target-searches (the Location header and its id).");
+
+    /// <summary>The id of an uncertainty study.</summary>
+    public static readonly ParameterNote UncertaintyId = new("id",
+        "Id of an uncertainty study, as returned by POST /api/v1/uncertainty-studies (the Location header and its id).");
+
+    /// <summary>The page of a listing.</summary>
+    public static readonly ParameterNote ListPage = new("page", "Page of the listing, from 1 (default 1), newest first.");
+
+    /// <summary>The page size of a listing.</summary>
+    public static readonly ParameterNote ListPageSize = new("pageSize", "Items per page, 1 … 100 (default 20).");
+
+    /// <summary>The title filter of a listing.</summary>
+    public static readonly ParameterNote ListTitle = new("title",
+        "Lists only items whose title contains this text (case-insensitive); none by default.");
 
     /// <summary>The name of a shipped example.</summary>
     public static readonly ParameterNote ExampleName = new("name",

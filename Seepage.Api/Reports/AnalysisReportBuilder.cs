@@ -11,35 +11,49 @@ public static class AnalysisReportBuilder
     public const string ChecksCaption = "Figures and checks";
     public static readonly string[] ChecksHeaders = ["Figure or check", "Method", "Achieved", "Required", "Result"];
 
-    public static ReportDocument Build(AnalysisResultDto r, FieldDto field, SectionDocument section, DateTimeOffset printed)
+    public static ReportDocument Build(AnalysisResultDto r, FieldDto field, SectionDocument section, DateTimeOffset printed,
+        PresentationUnits? units = null)
     {
-        string unit = section.ConductivityUnit ?? "m/s";
-        var blocks = new List<ReportBlock>
-        {
+        // The section as analysed is in metres and kN/m³ with every default filled, as the memo's units say.
+        if (r.AnalysedSection is { } analysed && SectionParser.Parse(analysed.ToJsonString(), out _) is { } si) section = si;
+        var u = units ?? PresentationUnits.Si;
+        string k = u.IsSi ? section.ConductivityUnit ?? "m/s" : u.ConductivityUnit;
+        string L = u.LengthUnit;
+        // Conductivities are posted in the section's unit; US memos print them in ft/day.
+        double? K(double? value) => u.IsSi ? value : u.Conductivity(value * ConductivityUnits.ToMetresPerSecond.GetValueOrDefault(section.ConductivityUnit ?? "m/s", 1.0));
+        string P(double[]? p) => p is { Length: >= 2 } ? Point([u.Length(p[0])!.Value, u.Length(p[1])!.Value]) : "—";
+        var blocks = new List<ReportBlock>();
+        if (TitleBlock(section.TitleBlock) is { } titleBlock) blocks.Add(titleBlock);
+        blocks.AddRange(
+        [
             new ReportHeading("1. Inputs"),
-            new ReportParagraph($"Section: {section.Title ?? r.Title}. {section.Description ?? ""} Lengths in m, elevations y positive up, " +
-                $"heads are total heads in m, conductivity in {unit}, unit weight of water {N(section.WaterUnitWeight ?? SectionDefaults.WaterUnitWeight)} kN/m³."),
-            new ReportTable("Soils", ["Soil", $"kx ({unit})", $"ky ({unit})", "Bedding angle (°)", "Gs", "Void ratio e", "γsat (kN/m³)", "Creep class"],
-                (section.Soils ?? []).Select(s => Row(s.Id ?? "", N(s.Kx), N(s.Ky ?? s.Kx), N(s.BeddingAngle ?? 0), N(s.SpecificGravity),
-                    N(s.VoidRatio), N(s.SaturatedUnitWeight), s.CreepClass ?? "—")).ToList()),
-            new ReportTable("Head and drain boundaries", ["Boundary", "Total head (m)", "From (x, y) m", "To (x, y) m"],
-                (section.Heads ?? []).Select(h => Row(h.Name ?? "", N(h.Total), Point(h.Along?.FirstOrDefault()), Point(h.Along?.LastOrDefault())))
-                .Concat((section.Drains ?? []).Select(d => Row(d.Name ?? "drain", "h = y (drain)", Point(d.Along?.FirstOrDefault()), Point(d.Along?.LastOrDefault()))))
+            new ReportParagraph($"Section: {section.Title ?? r.Title}. {section.Description ?? ""} Lengths in {L}, elevations y positive up, " +
+                $"heads are total heads in {L}, conductivity in {k}, unit weight of water " +
+                $"{N(u.UnitWeight(section.WaterUnitWeight ?? SectionDefaults.WaterUnitWeight))} {u.UnitWeightUnit}." +
+                (u.IsSi ? "" : " The analysis ran in SI units; this memo converts every figure to US customary units (NIST SP 811, 2008).")),
+            new ReportTable("Soils", ["Soil", $"kx ({k})", $"ky ({k})", "Bedding angle (°)", "Gs", "Void ratio e", $"γsat ({u.UnitWeightUnit})", "Creep class"],
+                (section.Soils ?? []).Select(s => Row(s.Id ?? "", N(K(s.Kx)), N(K(s.Ky ?? s.Kx)), N(s.BeddingAngle ?? 0), N(s.SpecificGravity),
+                    N(s.VoidRatio), N(u.UnitWeight(s.SaturatedUnitWeight)), s.CreepClass ?? "—")).ToList()),
+            new ReportTable("Head and drain boundaries", ["Boundary", $"Total head ({L})", $"From (x, y) {L}", $"To (x, y) {L}"],
+                (section.Heads ?? []).Select(h => Row(h.Name ?? "", N(u.Length(h.Total)), P(h.Along?.FirstOrDefault()), P(h.Along?.LastOrDefault())))
+                .Concat((section.Drains ?? []).Select(d => Row(d.Name ?? "drain", "h = y (drain)", P(d.Along?.FirstOrDefault()), P(d.Along?.LastOrDefault()))))
                 .ToList()),
-            new ReportTable("Structures and cutoffs", ["Item", "Kind", "From (x, y) m", "To (x, y) m"],
-                (section.Structures ?? []).Select(s => Row(s.Name ?? "", "impervious base", Point(s.Base?.FirstOrDefault()), Point(s.Base?.LastOrDefault())))
-                .Concat((section.Cutoffs ?? []).Select(c => Row(c.Name ?? "", c.Thickness is > 0 ? $"wall {N(c.Thickness)} m, kx {N(c.Kx)} {unit}" : "impervious cutoff",
-                    Point(c.Top), Point(c.Tip)))).ToList()),
-            new ReportFigure("Section geometry: soil zones, structures and cutoffs, head boundaries.", AnalysisFigures.Geometry(section)),
+            new ReportTable("Structures and cutoffs", ["Item", "Kind", $"From (x, y) {L}", $"To (x, y) {L}"],
+                (section.Structures ?? []).Select(s => Row(s.Name ?? "", "impervious base", P(s.Base?.FirstOrDefault()), P(s.Base?.LastOrDefault())))
+                .Concat((section.Cutoffs ?? []).Select(c => Row(c.Name ?? "", c.Thickness is > 0
+                    ? $"wall {N(u.Length(c.Thickness))} {L}, kx {N(K(c.Kx))} {k}" : "impervious cutoff", P(c.Top), P(c.Tip)))).ToList()),
+            new ReportFigure($"Section geometry: soil zones (legend), structures and cutoffs, head boundaries; {L}.", AnalysisFigures.Geometry(section, u)),
             new ReportHeading("2. Results"),
-            new ReportFigure($"Flow net: {field.FlowNet.HeadDrops} equal head drops and {field.FlowNet.FlowChannels} flow channels " +
-                $"(shape factor Nf/Nd = {N(field.FlowNet.ShapeFactor)}), drawn from the finite element head field.", AnalysisFigures.FlowNet(section, field)),
-            new ReportFigure("Uplift pressure under the structures (pore pressure u = γw (h − y)).", AnalysisFigures.Uplift(r)),
-        };
-        if (AnalysisFigures.ExitProfile(r) is { } exitFigure)
+            new ReportFigure((field.FlowNet.Caption ?? FlowNetCaption.Of(field.FlowNet)) + " Drawn from the finite element head field.",
+                AnalysisFigures.FlowNet(section, field, u)),
+            new ReportFigure($"Uplift pressure under the structures (pore pressure u = γw (h − y)), {u.PressureUnit}.", AnalysisFigures.Uplift(r, u)),
+        ]);
+        if (AnalysisFigures.ExitProfile(r, u) is { } exitFigure)
             blocks.Add(new ReportFigure("Upward exit gradient along the exit surface with the allowable gradient (critical gradient / required factor).", exitFigure));
-        blocks.Add(new ReportTable(ChecksCaption, ChecksHeaders, [.. Checks(r), .. AnalysisReportExtras.CheckRows(r)]));
+        blocks.Add(new ReportTable(ChecksCaption, ChecksHeaders, [.. Checks(r, u), .. AnalysisReportExtras.CheckRows(r, u)]));
         blocks.AddRange(AnalysisReportExtras.Blocks(r));
+        blocks.AddRange(AssumptionBlocks.Blocks(r));
+        blocks.AddRange(UnconfinedMemo.Blocks(r));
         if (r.Warnings.Count > 0) { blocks.Add(new ReportHeading("Warnings")); blocks.Add(new ReportList(r.Warnings)); }
         blocks.Add(new ReportHeading("3. Methods and sources"));
         blocks.Add(new ReportList(Methods(r, section)));
@@ -55,27 +69,46 @@ public static class AnalysisReportBuilder
         return new ReportDocument($"Seepage design memo: {r.Title}", $"Analysis {r.Id} of {r.CreatedAt:yyyy-MM-dd HH:mm} UTC", printed, r.Caution, blocks);
     }
 
-    /// <summary>One row per figure and check: the discharge, uplift resultants, piping, heave and the hand creep checks.</summary>
-    public static List<IReadOnlyList<string>> Checks(AnalysisResultDto r)
+    /// <summary>The title block from the section's optional <c>titleBlock</c>, or null when it gives nothing.</summary>
+    private static ReportTable? TitleBlock(TitleBlockDocument? t)
     {
+        if (t is null) return null;
+        var rows = new (string Label, string? Value)[]
+        {
+            ("Project", t.Project), ("Job number", t.JobNumber), ("Prepared by", t.PreparedBy), ("Checked by", t.CheckedBy), ("Revision", t.Revision),
+        }.Where(x => !string.IsNullOrWhiteSpace(x.Value)).Select(x => Row(x.Label, x.Value!)).ToList();
+        return rows.Count == 0 ? null : new ReportTable("Title block", ["Item", "Entry"], rows);
+    }
+
+    /// <summary>One row per figure and check: the discharge, uplift resultants, piping, heave and the hand creep checks,
+    /// every unit stated in the units asked for.</summary>
+    public static List<IReadOnlyList<string>> Checks(AnalysisResultDto r, PresentationUnits? units = null)
+    {
+        var u = units ?? PresentationUnits.Si;
+        string L = u.LengthUnit;
+        string P(double[]? p) => p is { Length: >= 2 } ? Point([u.Length(p[0])!.Value, u.Length(p[1])!.Value]) : "—";
         var rows = new List<IReadOnlyList<string>>
         {
-            Row("Seepage discharge (m³/s per m)", "FE, nodal reactions", N(r.Flow.PerMetre), "—", $"{N(r.Flow.PerMetrePerDay)} m³/day per m"),
+            Row($"Seepage discharge ({u.FlowUnit})", "FE, nodal reactions", N(u.Flow(r.Flow.PerMetre)), "—", $"{N(u.FlowAlt(r.Flow.PerMetre))} {u.FlowAltUnit}"),
         };
-        foreach (var u in r.Uplift)
-            rows.Add(Row($"Uplift force under {u.Structure} (kN/m)", "∫ u ds along the base", N(u.Force), "—", $"resultant at x = {N(u.CentroidX)} m"));
+        foreach (var up in r.Uplift)
+            rows.Add(Row($"Uplift force under {up.Structure} ({u.ForceUnit})", "∫ u ds along the base", N(u.Force(up.Force)), "—",
+                $"resultant at x = {N(u.Length(up.CentroidX))} {L}"));
         if (r.Exit is { } e)
         {
-            rows.Add(Row($"Max exit gradient at {Point(e.At)}", e.Method, N(e.MaxGradient), "—", $"i_c = {N(e.CriticalGradient)}"));
+            // The method text of the result document states its depth in m; a US memo states it in ft.
+            string method = u.IsSi ? e.Method : $"upward gradient averaged over {N(u.Length(e.Depth))} {L} below the exit surface";
+            rows.Add(Row($"Max exit gradient at {P(e.At)} {L}", method, N(e.MaxGradient), "—", $"i_c = {N(e.CriticalGradient)}"));
             rows.Add(Row("Factor against piping i_c / i_exit", "critical gradient (Gs − 1)/(1 + e)", N(e.Factor), N(e.RequiredFactor), Verdict(e.Pass)));
         }
         foreach (var h in r.Heave)
-            rows.Add(Row($"Heave at {h.Cutoff} (D = {N(h.Depth)} m, h_a = {N(h.AverageExcessHead)} m)", "Terzaghi's prism, width D/2",
-                N(h.Factor), N(h.RequiredFactor), Verdict(h.Pass)));
+            rows.Add(Row($"Heave at {h.Cutoff} (D = {N(u.Length(h.Depth))} {L}, h_a = {N(u.Length(h.AverageExcessHead))} {L})",
+                "Terzaghi's prism, width D/2",
+                N(h.Factor), N(h.RequiredFactor), h.Skipped is null ? Verdict(h.Pass) : "not an exit: " + h.Skipped));
         if (r.Creep is { } c)
         {
-            rows.Add(Row($"Lane weighted creep ratio (L_w = {N(c.Lane.WeightedLength)} m)", "Lane 1935", N(c.Lane.Ratio), N(c.Lane.Required), Verdict(c.Lane.Pass)));
-            rows.Add(Row($"Bligh creep ratio (L = {N(c.Bligh.WeightedLength)} m)", "Bligh 1910", N(c.Bligh.Ratio), N(c.Bligh.Required), Verdict(c.Bligh.Pass)));
+            rows.Add(Row($"Lane weighted creep ratio (L_w = {N(u.Length(c.Lane.WeightedLength))} {L})", "Lane 1935", N(c.Lane.Ratio), N(c.Lane.Required), Verdict(c.Lane.Pass)));
+            rows.Add(Row($"Bligh creep ratio (L = {N(u.Length(c.Bligh.WeightedLength))} {L})", "Bligh 1910", N(c.Bligh.Ratio), N(c.Bligh.Required), Verdict(c.Bligh.Pass)));
         }
         return rows;
     }

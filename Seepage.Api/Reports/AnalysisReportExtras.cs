@@ -41,20 +41,34 @@ public static class AnalysisReportExtras
                 [$"{N(t.LeftX)} … {N(t.RightX)}", N(t.Flow)],
                 [$"{N(t.ExtendedLeftX)} … {N(t.ExtendedRightX)} (pushed out)", N(t.ExtendedFlow)],
                 ["relative change", N(t.Change)],
+                // Results stored before the method was recorded were all wider solves.
+                ["method", t.Method == "sensitivity" ? "first-order estimate from the one solution (an upper bound)"
+                    : "the wider section meshed and solved"],
             ]);
     }
 
     /// <summary>Extra rows of the figures-and-checks table: total flow, element-row exit gradient, heave prism forces.</summary>
-    public static IEnumerable<IReadOnlyList<string>> CheckRows(AnalysisResultDto r)
+    public static IEnumerable<IReadOnlyList<string>> CheckRows(AnalysisResultDto r, PresentationUnits? units = null)
     {
+        var u = units ?? PresentationUnits.Si;
         if (r.Flow.Total is { } total)
-            yield return [$"Total discharge over {N(r.Flow.StructureLength)} m of structure (m³/s)", "perMetre × length", N(total), "—", $"{N(r.Flow.TotalPerDay)} m³/day"];
+        {
+            // Total flow: the per-metre rate times the length; in US terms ft³/day and gal/min.
+            double? length = r.Flow.StructureLength;
+            string rate = u.IsSi ? $"{N(total)}" : N(u.Flow(total / length) * u.Length(length));
+            string other = u.IsSi ? $"{N(r.Flow.TotalPerDay)} m³/day" : $"{N(u.FlowAlt(total / length) * u.Length(length))} gal/min";
+            string unit = u.IsSi ? "m³/s" : "ft³/day";
+            yield return [$"Total discharge over {N(u.Length(length))} {u.LengthUnit} of structure ({unit})", "perMetre × length", rate, "—", other];
+        }
         if (r.Exit is { MaxRowGradient: > 0 } e)
-            yield return [$"Exit gradient of the element row at the exit (max at {Point(e.MaxRowAt)})", "boundary triangle gradient, not averaged",
+            yield return [$"Exit gradient of the element row at the exit (max at {PointIn(e.MaxRowAt, u)} {u.LengthUnit})", "boundary triangle gradient, not averaged",
                 N(e.MaxRowGradient), "—", $"{N(e.RowGradientAtMax)} at the averaged maximum"];
         foreach (var h in r.Heave.Where(h => h.EffectiveWeight is not null))
-            yield return [$"Heave prism at {h.Cutoff}: W′ and U (kN/m)", "γ′·D·D/2 against γw·h_a·D/2", N(h.EffectiveWeight), "—", $"U = {N(h.PrismUpliftForce)}"];
+            yield return [$"Heave prism at {h.Cutoff}: W′ and U ({u.ForceUnit})", "γ′·D·D/2 against γw·h_a·D/2", N(u.Force(h.EffectiveWeight)), "—",
+                $"U = {N(u.Force(h.PrismUpliftForce))}"];
     }
+
+    private static string PointIn(double[]? p, PresentationUnits u) => p is { Length: >= 2 } ? Point([u.Length(p[0])!.Value, u.Length(p[1])!.Value]) : "—";
 
     private static double? At(double[] values, int i) => i < values.Length ? values[i] : null;
 }

@@ -12,7 +12,7 @@ public static class HtmlReportWriter
         h1 { font-size: 17pt; margin-bottom: 2px; } h2 { font-size: 13pt; margin-top: 22px; border-bottom: 1px solid #999; }
         .sub { color: #444; margin-top: 0; } .caution { border: 2px solid #b03a2e; padding: 8px 10px; background: #fdf2f0; }
         table { border-collapse: collapse; margin: 8px 0 14px; width: 100%; } caption { text-align: left; font-weight: bold; padding: 4px 0; }
-        th, td { border: 1px solid #888; padding: 3px 6px; text-align: left; vertical-align: top; } th { background: #eee; }
+        th, td { border: 1px solid #888; padding: 3px 6px; text-align: left; vertical-align: top; overflow-wrap: anywhere; } th { background: #eee; }
         td.fail { color: #b03a2e; font-weight: bold; } figure { margin: 10px 0 16px; page-break-inside: avoid; } figcaption { font-size: 9.5pt; color: #333; }
         svg { max-width: 100%; height: auto; }
         @media print { body { margin: 0; max-width: none; } h2 { page-break-after: avoid; } table { page-break-inside: avoid; } }

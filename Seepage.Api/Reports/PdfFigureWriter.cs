@@ -22,12 +22,12 @@ public static class PdfFigureWriter
         foreach (double t in ReportFormat.Ticks(x0, x1))
         {
             g.DrawLine(XPens.Black, X(t), top + Top + plotH, X(t), top + Top + plotH + 3);
-            g.DrawString(ReportFormat.N(t), font, XBrushes.Black, new XRect(X(t) - 30, top + Top + plotH + 4, 60, 9), XStringFormats.TopCenter);
+            g.DrawString(ReportFormat.Tick(t), font, XBrushes.Black, new XRect(X(t) - 30, top + Top + plotH + 4, 60, 9), XStringFormats.TopCenter);
         }
         foreach (double t in ReportFormat.Ticks(y0, y1, 5))
         {
             g.DrawLine(XPens.Black, left + Left - 3, Y(t), left + Left, Y(t));
-            g.DrawString(ReportFormat.N(t), font, XBrushes.Black, new XRect(left, Y(t) - 4.5, Left - 5, 9), XStringFormats.CenterRight);
+            g.DrawString(ReportFormat.Tick(t), font, XBrushes.Black, new XRect(left, Y(t) - 4.5, Left - 5, 9), XStringFormats.CenterRight);
         }
         g.DrawString(figure.XLabel, font, XBrushes.Black, new XRect(left + Left, top + Top + plotH + 14, (x1 - x0) * sx, 9), XStringFormats.TopCenter);
         var state = g.Save();

@@ -15,6 +15,15 @@ public static class ReportFormat
         return Math.Round(v, decimals).ToString("F" + decimals, CultureInfo.InvariantCulture);
     }
 
+    /// <summary>An axis tick label: as short as the value allows, no trailing zeros (5, 2.5, −10, 0.25).</summary>
+    public static string Tick(double t)
+    {
+        if (t == 0) return "0";
+        double a = Math.Abs(t);
+        if (a < 1e-4 || a >= 1e7) return t.ToString("0.###E+0", CultureInfo.InvariantCulture);
+        return Math.Round(t, 6).ToString("0.######", CultureInfo.InvariantCulture).Replace('-', '−');
+    }
+
     public static string Point(double[]? p) => p is { Length: >= 2 } ? $"({N(p[0])}, {N(p[1])})" : "—";
 
     public static string Verdict(bool? pass) => pass switch { true => "pass", false => "FAIL", null => "not checked" };

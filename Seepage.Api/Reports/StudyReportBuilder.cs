@@ -21,15 +21,17 @@ public static class StudyReportBuilder
     {
         var headers = new List<string> { "Alternative" };
         headers.AddRange(study.Parameters);
-        headers.AddRange(["Flow (m³/s per m)", "Uplift (kN/m)", "Max exit gradient", "Piping factor", "Heave factor", "Result"]);
+        headers.AddRange(["Flow (m³/s per m)", "Uplift (kN/m)", "Max exit gradient", "Piping factor", "Heave factor", "Lane", "Bligh",
+            "Result (checks covered)"]);
         var rows = study.Rows.Select(r =>
         {
             var cells = new List<string> { r.Name };
             cells.AddRange(study.Parameters.Select(p => r.Changes.TryGetValue(p, out var v) ? Text(v) : "base"));
             cells.AddRange(r.Valid
                 ? [N(r.Flow), N(r.UpliftForce), N(r.MaxExitGradient), Factor(r.ExitFactor, r.ExitRequiredFactor),
-                    Factor(r.HeaveFactor, r.HeaveRequiredFactor), Verdict(r.Pass)]
-                : ["—", "—", "—", "—", "—", "not analysed: " + string.Join("; ", r.Problems.SelectMany(p => p.Value.Select(m => $"{p.Key} {m}")))]);
+                    Factor(r.HeaveFactor, r.HeaveRequiredFactor), Verdict(r.LanePass), Verdict(r.BlighPass),
+                    $"{Verdict(r.Pass)} ({(r.PassCovers is { Count: > 0 } c ? string.Join(", ", c) : "none")})"]
+                : ["—", "—", "—", "—", "—", "—", "—", "not analysed: " + string.Join("; ", r.Problems.SelectMany(p => p.Value.Select(m => $"{p.Key} {m}")))]);
             return (IReadOnlyList<string>)cells;
         }).ToList();
 

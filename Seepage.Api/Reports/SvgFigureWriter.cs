@@ -26,9 +26,9 @@ public static class SvgFigureWriter
         svg.Append(Invariant($"<svg xmlns=\"http://www.w3.org/2000/svg\" viewBox=\"0 0 {width:F0} {height:F0}\" width=\"{width:F0}\" height=\"{height:F0}\" font-family=\"sans-serif\" font-size=\"11\">"));
         svg.Append(Invariant($"<rect x=\"{Left:F1}\" y=\"{Top:F1}\" width=\"{(x1 - x0) * sx:F1}\" height=\"{plotH:F1}\" fill=\"none\" stroke=\"#888888\" stroke-width=\"0.6\"/>"));
         foreach (double t in ReportFormat.Ticks(x0, x1))
-            svg.Append(Invariant($"<line x1=\"{X(t):F1}\" y1=\"{Top + plotH:F1}\" x2=\"{X(t):F1}\" y2=\"{Top + plotH + 4:F1}\" stroke=\"#444444\"/><text x=\"{X(t):F1}\" y=\"{Top + plotH + 16:F1}\" text-anchor=\"middle\">{ReportFormat.N(t)}</text>"));
+            svg.Append(Invariant($"<line x1=\"{X(t):F1}\" y1=\"{Top + plotH:F1}\" x2=\"{X(t):F1}\" y2=\"{Top + plotH + 4:F1}\" stroke=\"#444444\"/><text x=\"{X(t):F1}\" y=\"{Top + plotH + 16:F1}\" text-anchor=\"middle\">{ReportFormat.Tick(t)}</text>"));
         foreach (double t in ReportFormat.Ticks(y0, y1, 5))
-            svg.Append(Invariant($"<line x1=\"{Left - 4:F1}\" y1=\"{Y(t):F1}\" x2=\"{Left:F1}\" y2=\"{Y(t):F1}\" stroke=\"#444444\"/><text x=\"{Left - 6:F1}\" y=\"{Y(t) + 4:F1}\" text-anchor=\"end\">{ReportFormat.N(t)}</text>"));
+            svg.Append(Invariant($"<line x1=\"{Left - 4:F1}\" y1=\"{Y(t):F1}\" x2=\"{Left:F1}\" y2=\"{Y(t):F1}\" stroke=\"#444444\"/><text x=\"{Left - 6:F1}\" y=\"{Y(t) + 4:F1}\" text-anchor=\"end\">{ReportFormat.Tick(t)}</text>"));
         svg.Append(Invariant($"<text x=\"{Left + (x1 - x0) * sx / 2:F1}\" y=\"{Top + plotH + 34:F1}\" text-anchor=\"middle\">{E(figure.XLabel)}</text>"));
         svg.Append(Invariant($"<text transform=\"translate(14 {Top + plotH / 2:F1}) rotate(-90)\" text-anchor=\"middle\">{E(figure.YLabel)}</text>"));
 

@@ -15,6 +15,9 @@ public readonly record struct ConductivityTensor(double Kxx, double Kxy, double 
             soil.Kx * s * s + soil.Ky * c * c);
     }
 
+    /// <summary>The tensor times a dimensionless factor (a relative conductivity), m/s.</summary>
+    public ConductivityTensor Scaled(double factor) => new(Kxx * factor, Kxy * factor, Kyy * factor);
+
     /// <summary>Geometric mean conductivity √(kx·ky), m/s: the isotropic equivalent for flow-net counts.</summary>
     public double Mean => Math.Sqrt(Kxx * Kyy - Kxy * Kxy);
 }

@@ -17,9 +17,13 @@ public sealed record AssembledProblem(MeshBoundary Boundary, QuadraticDofs? Quad
 public static class FieldSolver
 {
     public static FieldSolution Solve(SectionModel section, Mesh mesh, int order, SolverOptions options,
-        CancellationToken cancellation = default)
+        CancellationToken cancellation = default) =>
+        Solve(Assemble(section, mesh, order), mesh, options, cancellation);
+
+    /// <summary>Solves an assembled head problem on its mesh.</summary>
+    public static FieldSolution Solve(AssembledProblem problem, Mesh mesh, SolverOptions options, CancellationToken cancellation = default)
     {
-        var (boundary, quadratic, fixedHeads, system, tensors) = Assemble(section, mesh, order);
+        var (boundary, quadratic, fixedHeads, system, tensors) = problem;
         var free = new double[system.Matrix.Size];
         var report = LinearSolver.Solve(system.Matrix, system.Rhs, free, options, cancellation);
         var heads = system.Expand(free);

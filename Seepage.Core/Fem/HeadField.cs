@@ -17,6 +17,14 @@ public sealed class HeadField(Mesh mesh, double[] heads, IReadOnlyList<Conductiv
     /// <summary>The quadratic unknowns, or null for linear elements.</summary>
     public QuadraticDofs? Quadratic { get; } = quadratic;
 
+    /// <summary>Dimensionless factor per triangle on its zone's tensor (the relative conductivity of an unconfined
+    /// solution: 1 where saturated, down to a small floor above the phreatic surface); null means 1 everywhere.</summary>
+    public double[]? ElementFactors { get; init; }
+
+    /// <summary>The conductivity tensor of triangle t, m/s (its zone's, times its element factor).</summary>
+    public ConductivityTensor TensorOf(int t) =>
+        ElementFactors is null ? ZoneTensors[Mesh.Zones[t]] : ZoneTensors[Mesh.Zones[t]].Scaled(ElementFactors[t]);
+
     /// <summary>Element order: 1 or 2.</summary>
     public int Order => Quadratic is null ? 1 : 2;
 
@@ -80,7 +88,7 @@ public sealed class HeadField(Mesh mesh, double[] heads, IReadOnlyList<Conductiv
 
     private (double, double) ToVelocity(int t, (double Dx, double Dy) g)
     {
-        var k = ZoneTensors[Mesh.Zones[t]];
+        var k = TensorOf(t);
         return (-(k.Kxx * g.Dx + k.Kxy * g.Dy), -(k.Kxy * g.Dx + k.Kyy * g.Dy));
     }
 }

@@ -41,6 +41,9 @@ public sealed class MeshBoundary
 
     public IReadOnlyList<BoundaryEdge> Edges { get; }
 
+    /// <summary>The mesh whose boundary this is.</summary>
+    public Mesh Mesh => _mesh;
+
     public Point2 Node(int i) => new(_mesh.X[i], _mesh.Y[i]);
 
     /// <summary>The boundary edges lying on a polyline (both ends and the midpoint within tolerance, m).</summary>

@@ -15,7 +15,7 @@ public sealed class QuadraticDofs
     {
         int n = mesh.NodeCount, nt = mesh.TriangleCount;
         var tri = mesh.Triangles;
-        _mid = new Dictionary<long, int>(3 * nt / 2 + 16);
+        _mid = new Dictionary<long, int>(3 * nt / 2 + 16, EdgeKey.Comparer);
         Elements = new int[6 * nt];
         var x = new List<double>(mesh.X); var y = new List<double>(mesh.Y);
         for (int t = 0; t < nt; t++)
@@ -23,7 +23,7 @@ public sealed class QuadraticDofs
             {
                 int i = tri[3 * t + a], j = tri[3 * t + (a + 1) % 3];
                 Elements[6 * t + a] = i;
-                long key = Key(i, j);
+                long key = EdgeKey.Of(i, j);
                 if (!_mid.TryGetValue(key, out int m))
                 {
                     m = x.Count; _mid[key] = m;
@@ -45,7 +45,5 @@ public sealed class QuadraticDofs
     public double[] Y { get; }
 
     /// <summary>The mid node of the edge between mesh nodes a and b; −1 when there is no such edge.</summary>
-    public int Mid(int a, int b) => _mid.TryGetValue(Key(a, b), out int m) ? m : -1;
-
-    private static long Key(int i, int j) => ((long)Math.Min(i, j) << 32) | (uint)Math.Max(i, j);
+    public int Mid(int a, int b) => _mid.TryGetValue(EdgeKey.Of(a, b), out int m) ? m : -1;
 }

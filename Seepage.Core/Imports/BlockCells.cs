@@ -10,6 +10,12 @@ internal sealed class BlockCells(List<ImportProblem> problems)
 
     public List<ImportProblem> Problems => problems;
 
+    /// <summary>Factors from the units in column headers to the section's units (see <see cref="HeaderUnits"/>).</summary>
+    public Dictionary<(SheetBlock, string), double> Factors { get; set; } = [];
+
+    /// <summary>Every block of the workbook (the header units of all of them are checked against the section's units).</summary>
+    public IReadOnlyList<SheetBlock> Blocks { get; set; } = [];
+
     /// <summary>Notes that <paramref name="pointer"/> came from the cell of <paramref name="column"/> in <paramref name="row"/>.</summary>
     public void Mark(string pointer, SheetBlock block, int row, string column) => Map.TryAdd(pointer, block.At(row, column));
 
@@ -35,7 +41,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
             case "true" or "yes" or "1": return true;
             case "false" or "no" or "0": return false;
         }
-        problems.Add(new ImportProblem(block.At(row, column), $"'{CsvText.Format(value)}' is not a yes/no value (the '{column}' column takes true or false)."));
+        problems.Add(new ImportProblem(block.At(row, column), $"'{SafeText.Of(CsvText.Format(value))}' is not a yes/no value (the '{column}' column takes true or false)."));
         return null;
     }
 
@@ -54,7 +60,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
         else if (!TryParse(CsvText.Format(value).Trim(), out number))
         {
             problems.Add(new ImportProblem(block.At(row, column),
-                $"'{CsvText.Format(value)}' is not a number (the '{column}' column takes numbers such as 2.5 or 3e-4)."));
+                $"'{SafeText.Of(CsvText.Format(value))}' is not a number (the '{column}' column takes numbers such as 2.5 or 3e-4)."));
             return null;
         }
         if (!double.IsFinite(number))
@@ -62,7 +68,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
             problems.Add(new ImportProblem(block.At(row, column), $"The '{column}' cell must hold a finite number."));
             return null;
         }
-        return number;
+        return Factors.TryGetValue((block, column), out double factor) ? number * factor : number;
     }
 
     /// <summary>Reads invariant numbers ("2.5", "3e-4") and, failing that, a single decimal comma ("2,5").</summary>
@@ -122,7 +128,7 @@ internal sealed class BlockCells(List<ImportProblem> problems)
             if (first is null) { first = value; firstRow = r; Mark(pointer, block, r, column); }
             else if (!Equals(first, value))
                 problems.Add(new ImportProblem(block.At(r, column),
-                    $"'{CsvText.Format(block.Value(r, column))}' differs from the '{column}' given in row {firstRow + 1} for the same item; leave it blank or repeat the same value."));
+                    $"'{SafeText.Of(CsvText.Format(block.Value(r, column)))}' differs from the '{column}' given in row {firstRow + 1} for the same item; leave it blank or repeat the same value."));
         }
         return first;
     }

@@ -3,8 +3,8 @@ using System.Text;
 namespace Seepage.Core.Imports;
 
 /// <summary>Reads and writes comma-separated text (RFC 4180: fields holding a comma, a quote or a line break are
-/// quoted, a quote inside is doubled). When the first line holding either holds semicolons and no commas the text is read as
-/// semicolon-separated (as spreadsheets set to a decimal-comma locale save it).</summary>
+/// quoted, a quote inside is doubled). Text whose first non-comment line holding a separator has semicolons (and no commas
+/// other than decimal commas) is read as semicolon-separated, as spreadsheets set to a decimal-comma locale save it.</summary>
 public static class CsvText
 {
     /// <summary>Splits <paramref name="text"/> into a grid named <paramref name="sheet"/>; every cell is a string or null.</summary>
@@ -40,7 +40,8 @@ public static class CsvText
         return new SheetGrid(sheet, rows);
     }
 
-    /// <summary>Writes the grid as comma-separated text with CRLF line ends; doubles in invariant round-trip form.</summary>
+    /// <summary>Writes the grid as comma-separated text with CRLF line ends; doubles in invariant round-trip form, text that
+    /// would start a formula escaped (<see cref="FormulaGuard"/>).</summary>
     public static string Write(IEnumerable<IReadOnlyList<object?>> rows)
     {
         var sb = new StringBuilder();
@@ -51,7 +52,7 @@ public static class CsvText
             for (int j = 0; j <= last; j++)
             {
                 if (j > 0) sb.Append(',');
-                sb.Append(Quote(Format(row[j])));
+                sb.Append(Quote(Format(FormulaGuard.Escape(row[j]))));
             }
             sb.Append("\r\n");
         }
@@ -72,19 +73,32 @@ public static class CsvText
 
     private static object? Cell(StringBuilder field, bool quoted)
     {
-        string s = field.ToString();
+        string s = FormulaGuard.Unescape(field.ToString());
         field.Clear();
         return s.Length == 0 && !quoted ? null : s;
     }
 
-    // The first line holding a comma or a semicolon decides (block-name rows hold neither).
+    // The separator is decided by the block and column-name rows, never by comment rows (first cell starting with '#'),
+    // whose prose may hold commas. The first other line holding a comma or a semicolon decides: semicolons with no comma,
+    // or with commas only between digits (decimal commas, as in "2,5;3,0"), mean ';'. Block-name rows hold neither.
     private static char DetectDelimiter(string text)
     {
-        foreach (string line in text.Split('\n'))
+        foreach (string raw in text.Split('\n'))
         {
+            string line = raw.TrimStart().TrimStart('"').TrimStart();
+            if (line.StartsWith('#')) continue;
             bool comma = line.Contains(','), semicolon = line.Contains(';');
-            if (comma || semicolon) return !comma && semicolon ? ';' : ',';
+            if (!comma && !semicolon) continue;
+            return semicolon && (!comma || OnlyDecimalCommas(line)) ? ';' : ',';
         }
         return ',';
+    }
+
+    private static bool OnlyDecimalCommas(string line)
+    {
+        for (int i = 0; i < line.Length; i++)
+            if (line[i] == ',' && (i == 0 || i + 1 >= line.Length || !char.IsAsciiDigit(line[i - 1]) || !char.IsAsciiDigit(line[i + 1])))
+                return false;
+        return true;
     }
 }

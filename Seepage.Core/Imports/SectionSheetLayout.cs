@@ -2,7 +2,7 @@ namespace Seepage.Core.Imports;
 
 /// <summary>
 /// Our spreadsheet layout of a section document: blocks, each opened by a row holding only the block's name in
-/// column A, then a row of column names (any order; text in parentheses, such as a unit, is ignored), then one
+/// column A, then a row of column names (any order; a unit in parentheses is honoured or refused, see HeaderUnits), then one
 /// row per item or per vertex. Blank rows and rows whose first cell starts with '#' are skipped anywhere. In a
 /// workbook a sheet named after a block may leave out the block-name row; sheets named "notes" or starting with
 /// '#' are ignored. The README section "Sections from a spreadsheet" documents the blocks.
@@ -19,9 +19,10 @@ public static class SectionSheetLayout
     public const string Checks = "checks";
     public const string Mesh = "mesh";
     public const string Gauges = "gauges";
+    public const string SeepageFaces = "seepage faces";
 
     /// <summary>Block names in the order the templates write them.</summary>
-    public static readonly IReadOnlyList<string> Blocks = [Section, Soils, Zones, Structures, Cutoffs, Heads, Drains, Checks, Mesh, Gauges];
+    public static readonly IReadOnlyList<string> Blocks = [Section, Soils, Zones, Structures, Cutoffs, Heads, Drains, SeepageFaces, Checks, Mesh, Gauges];
 
     /// <summary>Blocks every section needs.</summary>
     public static readonly IReadOnlyList<string> RequiredBlocks = [Soils, Zones, Heads];
@@ -29,7 +30,8 @@ public static class SectionSheetLayout
     /// <summary>The columns of each block (canonical names, as in the JSON contract where one exists).</summary>
     public static readonly IReadOnlyDictionary<string, string[]> Columns = new Dictionary<string, string[]>
     {
-        [Section] = ["title", "description", "conductivityUnit", "waterUnitWeight", "structureLength", "truncationCheck"],
+        [Section] = ["title", "description", "conductivityUnit", "lengthUnit", "unitWeightUnit", "waterUnitWeight", "structureLength",
+            "truncationCheck", "unconfined"],
         [Soils] = ["id", "kx", "ky", "beddingAngle", "specificGravity", "voidRatio", "saturatedUnitWeight", "creepClass"],
         [Zones] = ["zone", "soil", "x", "y", "size"],
         [Structures] = ["name", "x", "y"],
@@ -39,6 +41,7 @@ public static class SectionSheetLayout
         [Checks] = ["check", "x", "y", "depth", "requiredFactor"],
         [Mesh] = ["size", "minAngle", "order", "convergenceCheck"],
         [Gauges] = ["name", "x", "y"],
+        [SeepageFaces] = ["name", "x", "y"],
     };
 
     /// <summary>Columns a block cannot do without.</summary>
@@ -54,6 +57,7 @@ public static class SectionSheetLayout
         [Checks] = ["check"],
         [Mesh] = [],
         [Gauges] = ["name", "x", "y"],
+        [SeepageFaces] = ["name", "x", "y"],
     };
 
     /// <summary>The unit written after a column name in the templates; "k" stands for the section's conductivity unit.</summary>

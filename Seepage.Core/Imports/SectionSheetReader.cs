@@ -19,6 +19,8 @@ public static class SectionSheetReader
 
         List<SheetBlock> Of(string name) => blocks.Where(b => b.Name == name).ToList();
         var doc = new SectionDocument();
+        cells.Blocks = blocks;
+        if (Of(L.Section).Count == 0) cells.Factors = HeaderUnits.Factors(blocks, doc, problems);
         foreach (var b in Of(L.Section)) doc = ReadSection(doc, b, cells);
         doc = doc with
         {
@@ -38,6 +40,10 @@ public static class SectionSheetReader
             Drains = Any(Of(L.Drains), bs => Lines(bs, "name", cells).Select((g, i) => new DrainDocument
             {
                 Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/drains/{i}/along"),
+            }).ToList()),
+            SeepageFaces = Any(Of(L.SeepageFaces), bs => Lines(bs, "name", cells).Select((g, i) => new SeepageFaceDocument
+            {
+                Name = g.Key, Along = cells.Vertices(g.Block, g.Rows, $"/seepageFaces/{i}/along"),
             }).ToList()),
             Gauges = Any(Of(L.Gauges), bs => Lines(bs, "name", cells).Select((g, i) => new GaugeDocument
             {
@@ -62,18 +68,28 @@ public static class SectionSheetReader
 
     private static List<T>? Any<T>(List<SheetBlock> blocks, Func<List<SheetBlock>, List<T>> read) => blocks.Count == 0 ? null : read(blocks);
 
+    // The section's units are read first: the units in the column headers are converted to them.
     private static SectionDocument ReadSection(SectionDocument doc, SheetBlock b, BlockCells cells)
     {
         foreach (int r in OneRow(b, cells.Problems))
+        {
             doc = doc with
             {
                 Title = cells.Text(b, r, "title", "/title"),
                 Description = cells.Text(b, r, "description", "/description"),
                 ConductivityUnit = cells.Text(b, r, "conductivityUnit", "/conductivityUnit"),
+                LengthUnit = cells.Text(b, r, "lengthUnit", "/lengthUnit"),
+                UnitWeightUnit = cells.Text(b, r, "unitWeightUnit", "/unitWeightUnit"),
+            };
+            cells.Factors = HeaderUnits.Factors(cells.Blocks, doc, cells.Problems);
+            doc = doc with
+            {
                 WaterUnitWeight = cells.Number(b, r, "waterUnitWeight", "/waterUnitWeight"),
                 StructureLength = cells.Number(b, r, "structureLength", "/structureLength"),
                 TruncationCheck = cells.Flag(b, r, "truncationCheck", "/truncationCheck"),
+                Unconfined = cells.Flag(b, r, "unconfined", "/unconfined"),
             };
+        }
         return doc;
     }
 
@@ -157,7 +173,7 @@ public static class SectionSheetReader
                     cells.Mark("/heaveCheck", b, rows[0], "check");
                     break;
                 default:
-                    cells.Problems.Add(new ImportProblem(b.At(rows[0], "check"), $"'{kind}' is not a check; use 'exit' or 'heave'."));
+                    cells.Problems.Add(new ImportProblem(b.At(rows[0], "check"), $"'{SafeText.Of(kind)}' is not a check; use 'exit' or 'heave'."));
                     break;
             }
         }

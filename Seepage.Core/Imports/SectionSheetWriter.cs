@@ -9,11 +9,11 @@ public static class SectionSheetWriter
 {
     public static List<(string Block, List<object?[]> Rows)> Blocks(SectionDocument d)
     {
-        string k = d.ConductivityUnit ?? "m/s";
         var blocks = new List<(string, List<object?[]>)>();
-        void Add(string block, IEnumerable<object?[]> rows) => blocks.Add((block, [Header(block, k), .. rows]));
+        void Add(string block, IEnumerable<object?[]> rows) => blocks.Add((block, [Header(block, d), .. rows]));
 
-        Add(L.Section, [[d.Title, d.Description, d.ConductivityUnit, d.WaterUnitWeight, d.StructureLength, d.TruncationCheck]]);
+        Add(L.Section, [[d.Title, d.Description, d.ConductivityUnit, d.LengthUnit, d.UnitWeightUnit, d.WaterUnitWeight, d.StructureLength,
+            d.TruncationCheck, d.Unconfined]]);
         if (d.Soils is { } soils)
             Add(L.Soils, soils.Select(s => new object?[] { s.Id, s.Kx, s.Ky, s.BeddingAngle, s.SpecificGravity, s.VoidRatio, s.SaturatedUnitWeight, s.CreepClass }));
         if (d.Zones is { } zones)
@@ -27,6 +27,8 @@ public static class SectionSheetWriter
             Add(L.Heads, heads.SelectMany(h => (h.Along ?? []).Select((p, v) => new object?[] { h.Name, v == 0 ? h.Total : null, X(p), Y(p) })));
         if (d.Drains is { } drains)
             Add(L.Drains, drains.SelectMany(h => (h.Along ?? []).Select(p => new object?[] { h.Name, X(p), Y(p) })));
+        if (d.SeepageFaces is { } faces)
+            Add(L.SeepageFaces, faces.SelectMany(f => (f.Along ?? []).Select(p => new object?[] { f.Name, X(p), Y(p) })));
         if (d.ExitCheck is not null || d.HeaveCheck is not null)
         {
             var rows = new List<object?[]>();
@@ -45,14 +47,21 @@ public static class SectionSheetWriter
         return blocks;
     }
 
-    /// <summary>The column names of a block, each followed by its unit in parentheses where it has one.</summary>
-    public static object?[] Header(string block, string conductivityUnit) =>
-        L.Columns[block].Select(c => (object?)(L.Unit(c) switch
+    /// <summary>The column names of a block, each followed by its unit in parentheses where it has one (in the units the
+    /// section declares).</summary>
+    public static object?[] Header(string block, SectionDocument d)
+    {
+        string length = d.LengthUnit ?? "m", weight = d.UnitWeightUnit ?? "kN/m³";
+        return L.Columns[block].Select(c => (object?)(L.Unit(c) switch
         {
             null => c,
-            "k" => $"{c} ({conductivityUnit})",
+            "k" => $"{c} ({d.ConductivityUnit ?? "m/s"})",
+            "m" => $"{c} ({length})",
+            "m total head" => $"{c} ({length} total head)",
+            "kN/m³" => $"{c} ({weight})",
             string unit => $"{c} ({unit})",
         })).ToArray();
+    }
 
     private static object? X(double[]? p) => p is { Length: > 0 } ? p[0] : null;
     private static object? Y(double[]? p) => p is { Length: > 1 } ? p[1] : null;

@@ -17,10 +17,30 @@ public static class SectionSpreadsheet
         "# Rows whose first cell starts with # are skipped. " + AnalysisResult.Caution,
     ];
 
-    public static SheetImport ReadCsv(string text) => SectionSheetReader.Read([CsvText.Read(text, CsvSheet)]);
+    public static SheetImport ReadCsv(string text, SpreadsheetLimits? limits = null) => Read([CsvText.Read(text, CsvSheet)], limits);
 
-    /// <summary>Reads a workbook; throws <see cref="InvalidDataException"/> when the bytes are not an .xlsx workbook.</summary>
-    public static SheetImport ReadXlsx(Stream workbook) => SectionSheetReader.Read(XlsxWorkbook.Read(workbook));
+    /// <summary>Reads a workbook, refusing one beyond <paramref name="limits"/> before any cell is parsed (see
+    /// <see cref="XlsxPreflight"/>); throws <see cref="InvalidDataException"/> when the bytes are not an .xlsx workbook.</summary>
+    public static SheetImport ReadXlsx(Stream workbook, SpreadsheetLimits? limits = null, CancellationToken cancellation = default)
+    {
+        limits ??= SpreadsheetLimits.Default;
+        using var buffer = new MemoryStream();
+        workbook.CopyTo(buffer);
+        byte[] bytes = buffer.ToArray();
+        List<ImportProblem> problems;
+        try { problems = XlsxPreflight.Check(bytes, limits, cancellation); }
+        catch (InvalidDataException ex) { throw new InvalidDataException($"The body is not a readable .xlsx workbook: {ex.Message}", ex); }
+        return problems.Count > 0 ? new SheetImport(null, problems, new Dictionary<string, CellRef>())
+            : Read(XlsxWorkbook.Read(new MemoryStream(bytes), limits, cancellation), limits);
+    }
+
+    private static SheetImport Read(IReadOnlyList<SheetGrid> sheets, SpreadsheetLimits? limits)
+    {
+        var problems = new List<ImportProblem>();
+        foreach (var sheet in sheets)
+            if (!(limits ?? SpreadsheetLimits.Default).Check(sheet, problems)) return new SheetImport(null, problems, new Dictionary<string, CellRef>());
+        return SectionSheetReader.Read(sheets);
+    }
 
     /// <summary>All blocks on one sheet, separated by blank rows, after the notes.</summary>
     public static string WriteCsv(SectionDocument document)

@@ -15,12 +15,13 @@ internal static class SheetBlockScanner
             bool expectHeader = false;
             int header = -1;
             Dictionary<string, int> columns = [];
+            Dictionary<string, string> units = [];
             List<int> data = [];
 
             void Close()
             {
-                if (current is not null && header >= 0) blocks.Add(new SheetBlock(current, sheet, header, columns, data));
-                current = null; header = -1; columns = []; data = [];
+                if (current is not null && header >= 0) blocks.Add(new SheetBlock(current, sheet, header, columns, data) { Units = units });
+                current = null; header = -1; columns = []; units = []; data = [];
             }
 
             for (int r = 0; r < sheet.Rows.Count; r++)
@@ -47,7 +48,7 @@ internal static class SheetBlockScanner
                 if (expectHeader)
                 {
                     header = r;
-                    columns = ReadHeader(sheet, r, current, problems);
+                    columns = ReadHeader(sheet, r, current, problems, units);
                     expectHeader = false;
                     continue;
                 }
@@ -58,7 +59,8 @@ internal static class SheetBlockScanner
         return blocks;
     }
 
-    private static Dictionary<string, int> ReadHeader(SheetGrid sheet, int r, string block, List<ImportProblem> problems)
+    private static Dictionary<string, int> ReadHeader(SheetGrid sheet, int r, string block, List<ImportProblem> problems,
+        Dictionary<string, string> units)
     {
         var columns = new Dictionary<string, int>();
         var row = sheet.Rows[r];
@@ -69,10 +71,15 @@ internal static class SheetBlockScanner
             string? column = SectionSheetLayout.ColumnNamed(block, text);
             var cell = new CellRef(sheet.Name, r + 1, j + 1);
             if (column is null)
-                problems.Add(new ImportProblem(cell, $"'{text}' is not a column of the '{block}' block; its columns are " +
+            {
+                string bare = text.Split('(', '[')[0].Trim();
+                string near = Sections.NearMatch.Suggestion(bare, SectionSheetLayout.Columns[block]) is { } s ? $" {char.ToUpperInvariant(s[0])}{s[1..]}" : "";
+                problems.Add(new ImportProblem(cell, $"'{SafeText.Of(text)}' is not a column of the '{block}' block.{near} Its columns are " +
                     string.Join(", ", SectionSheetLayout.Columns[block]) + "."));
+            }
             else if (!columns.TryAdd(column, j))
                 problems.Add(new ImportProblem(cell, $"The column '{column}' appears twice in the '{block}' block."));
+            else if (HeaderUnits.Of(text) is { } unit) units[column] = unit;
         }
         foreach (string required in SectionSheetLayout.RequiredColumns[block].Where(c => !columns.ContainsKey(c)))
             problems.Add(new ImportProblem(new CellRef(sheet.Name, r + 1, row.Count + 1),

@@ -5,9 +5,12 @@ namespace Seepage.Core.Imports;
 /// <summary>Reads and writes .xlsx workbooks as grids (MiniExcel). Numeric cells come back as doubles, text as strings.</summary>
 public static class XlsxWorkbook
 {
-    /// <summary>Reads every sheet. Throws <see cref="InvalidDataException"/> when the bytes are not an xlsx workbook.</summary>
-    public static IReadOnlyList<SheetGrid> Read(Stream stream)
+    /// <summary>Reads every sheet, at most <see cref="SpreadsheetLimits.MaxRows"/> + 1 rows and
+    /// <see cref="SpreadsheetLimits.MaxColumns"/> + 1 columns of each (the one beyond is kept so the limit check can name it).
+    /// Throws <see cref="InvalidDataException"/> when the bytes are not an xlsx workbook.</summary>
+    public static IReadOnlyList<SheetGrid> Read(Stream stream, SpreadsheetLimits? limits = null, CancellationToken cancellation = default)
     {
+        limits ??= SpreadsheetLimits.Default;
         using var buffer = new MemoryStream();
         stream.CopyTo(buffer);
         try
@@ -21,10 +24,13 @@ public static class XlsxWorkbook
                 var rows = new List<IReadOnlyList<object?>>();
                 foreach (IDictionary<string, object?> row in MiniExcel.Query(buffer, useHeaderRow: false, sheetName: name))
                 {
+                    cancellation.ThrowIfCancellationRequested();
+                    if (rows.Count > limits.MaxRows) break;
                     var cells = new List<object?>();
                     foreach (var (key, value) in row)
                     {
                         int column = ColumnNumber(key);
+                        if (column > limits.MaxColumns + 1) continue;
                         while (cells.Count < column) cells.Add(null);
                         cells[column - 1] = Normalise(value);
                     }
@@ -34,7 +40,7 @@ public static class XlsxWorkbook
             }
             return sheets;
         }
-        catch (Exception ex) when (ex is not InvalidDataException and not OutOfMemoryException)
+        catch (Exception ex) when (ex is not InvalidDataException and not OutOfMemoryException and not OperationCanceledException)
         {
             throw new InvalidDataException($"The body is not a readable .xlsx workbook: {ex.Message}", ex);
         }
@@ -50,7 +56,7 @@ public static class XlsxWorkbook
             var rows = sheet.Rows.Select(r =>
             {
                 IDictionary<string, object?> row = new Dictionary<string, object?>();
-                for (int j = 0; j < width; j++) row[CellRef.Letters(j + 1)] = j < r.Count ? r[j] : null;
+                for (int j = 0; j < width; j++) row[CellRef.Letters(j + 1)] = j < r.Count ? FormulaGuard.Escape(r[j]) : null;
                 return row;
             }).ToList();
             book[sheet.Name] = rows;
@@ -63,7 +69,7 @@ public static class XlsxWorkbook
     private static object? Normalise(object? value) => value switch
     {
         null => null,
-        string s => s,
+        string s => FormulaGuard.Unescape(s),
         double d => d,
         float f => (double)f,
         int or long or decimal or short => Convert.ToDouble(value, System.Globalization.CultureInfo.InvariantCulture),

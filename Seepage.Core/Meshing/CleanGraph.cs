@@ -142,5 +142,15 @@ internal sealed class CleanGraph
             }
             Slits.Add(clean.ToArray());
         }
+        // Internal lines are crossed when zones are flooded, like slits, where nothing else but the line itself
+        // put the segment there (a zone edge under it still parts the zones).
+        foreach (var line in graph.InternalLines)
+            for (int i = 0; i + 1 < line.Chain.Count; i++)
+            {
+                int a = Map[line.Chain[i]], b = Map[line.Chain[i + 1]];
+                if (a == b) continue;
+                long key = ((long)Math.Min(a, b) << 32) | (uint)Math.Max(a, b);
+                if (index.TryGetValue(key, out int s) && multiplicity[s] <= 1) SlitOnly[s] = true;
+            }
     }
 }

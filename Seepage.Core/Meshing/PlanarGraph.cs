@@ -16,7 +16,13 @@ public sealed record PlanarGraph(
     IReadOnlyList<GraphSegment> Segments,
     IReadOnlyList<RegionSeed> Regions,
     IReadOnlyList<Slit> Slits,
-    IReadOnlyList<SizeTarget> RefineNear);
+    IReadOnlyList<SizeTarget> RefineNear)
+{
+    /// <summary>Internal constraint lines (chains of vertex indices, each consecutive pair also a segment) that lie
+    /// inside a zone, such as a drain in an embankment: the mesh carries them as edges, but they part no zones
+    /// (a region cut off only by them takes the zone across them) and their nodes are not split.</summary>
+    public IReadOnlyList<InternalLine> InternalLines { get; init; } = [];
+}
 
 /// <summary>A constraint segment between two vertex indices of <see cref="PlanarGraph.Vertices"/>.</summary>
 public readonly record struct GraphSegment(int A, int B);
@@ -34,3 +40,7 @@ public sealed record Slit(IReadOnlyList<int> Chain);
 
 /// <summary>A local size request: edge length <paramref name="Size"/> metres at <paramref name="Point"/>.</summary>
 public sealed record SizeTarget(Point2 Point, double Size);
+
+/// <summary>An internal constraint line inside a zone: a chain of vertex indices (see
+/// <see cref="PlanarGraph.InternalLines"/>).</summary>
+public sealed record InternalLine(IReadOnlyList<int> Chain);

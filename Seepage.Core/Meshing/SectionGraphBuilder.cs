@@ -21,6 +21,7 @@ public static class SectionGraphBuilder
         var lines = section.Structures.Select(s => s.Base)
             .Concat(section.Heads.Select(h => h.Along))
             .Concat(section.Drains.Select(d => d.Along))
+            .Concat(section.SeepageFaces.Select(f => f.Along))
             .Append(section.ExitCheck.Along).ToList();
         foreach (var line in lines)
             for (int i = 0; i + 1 < line.Count; i++) raw.Add((line[i], line[i + 1]));
@@ -53,7 +54,9 @@ public static class SectionGraphBuilder
         foreach (var line in lines.Take(lines.Count - 1)) { targets.Add(new(line[0], singular)); targets.Add(new(line[^1], singular)); }
 
         var ordered = segments.OrderBy(s => s.Item1).ThenBy(s => s.Item2).Select(s => new GraphSegment(s.Item1, s.Item2)).ToList();
-        return new PlanarGraph(pool.Points, ordered, seeds, slits, targets);
+        var internalLines = section.Drains.Where(d => d.Internal).SelectMany(d => d.Along.Zip(d.Along.Skip(1)))
+            .Select(p => new InternalLine(Chain(pool, p.First, p.Second, tol))).ToList();
+        return new PlanarGraph(pool.Points, ordered, seeds, slits, targets) { InternalLines = internalLines };
     }
 
     // Vertex indices on segment ab, from a to b.

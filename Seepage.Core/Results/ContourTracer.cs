@@ -1,13 +1,15 @@
+using Seepage.Core.Fem;
 using Seepage.Core.Geometry;
 using Seepage.Core.Meshing;
 
 namespace Seepage.Core.Results;
 
 /// <summary>Level lines of a P1 nodal field: in each triangle the level crosses two edges at linearly
-/// interpolated points; the pieces are joined into polylines through the mesh edges they share.</summary>
+/// interpolated points; the pieces are joined into polylines through the mesh edges they share. An optional mask
+/// keeps the lines to the triangles it marks (the saturated soil of an unconfined section).</summary>
 public static class ContourTracer
 {
-    public static List<List<Point2>> Trace(Mesh mesh, double[] values, double level)
+    public static List<List<Point2>> Trace(Mesh mesh, double[] values, double level, bool[]? keep = null)
     {
         var tri = mesh.Triangles;
         // Each piece joins two crossed mesh edges, keyed by their (min, max) node pair.
@@ -16,6 +18,7 @@ public static class ContourTracer
         Span<Point2> pts = stackalloc Point2[2];
         for (int t = 0; t < mesh.TriangleCount; t++)
         {
+            if (keep is not null && !keep[t]) continue;
             int found = 0;
             for (int e = 0; e < 3 && found < 2; e++)
             {
@@ -23,7 +26,7 @@ public static class ContourTracer
                 double vi = values[i] - level, vj = values[j] - level;
                 if ((vi < 0) == (vj < 0)) continue;
                 double s = vi / (vi - vj);
-                keys[found] = ((long)Math.Min(i, j) << 32) | (uint)Math.Max(i, j);
+                keys[found] = EdgeKey.Of(i, j);
                 pts[found] = new Point2(mesh.X[i] + s * (mesh.X[j] - mesh.X[i]), mesh.Y[i] + s * (mesh.Y[j] - mesh.Y[i]));
                 found++;
             }
@@ -34,7 +37,7 @@ public static class ContourTracer
 
     private static List<List<Point2>> Join(List<(long A, long B, Point2 Pa, Point2 Pb)> pieces)
     {
-        var byKey = new Dictionary<long, List<int>>();
+        var byKey = new Dictionary<long, List<int>>(EdgeKey.Comparer);
         for (int p = 0; p < pieces.Count; p++)
         {
             Add(pieces[p].A, p); Add(pieces[p].B, p);

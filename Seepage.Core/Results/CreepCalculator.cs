@@ -35,6 +35,8 @@ public static class CreepCalculator
     {
         double? required = cls is not null && table.TryGetValue(cls, out var r) ? r : null;
         double ratio = length / h;
-        return new CreepCheck(length, ratio, required, required is { } req ? ratio >= req : null, source);
+        string? skipped = required is not null ? null
+            : cls is null ? "the soil at the exit has no creepClass." : $"the table gives no ratio for creepClass '{cls}'.";
+        return new CreepCheck(length, ratio, required, required is { } req ? ratio >= req : null, source) { Skipped = skipped };
     }
 }

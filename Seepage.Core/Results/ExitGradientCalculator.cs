@@ -11,7 +11,9 @@ namespace Seepage.Core.Results;
 /// what is compared with the critical gradient i_c = (Gs − 1)/(1 + e) (or (γsat − γw)/γw) (Terzaghi, "Theoretical Soil
 /// Mechanics", 1943: the flotation gradient). Beside it each station carries the gradient of the single element row
 /// at the exit, ∇h·n of the boundary triangle at the station, so a reviewer sees how much the averaging matters.
-/// The default depth d (<see cref="SectionDefaults.ExitDepth"/>) is set by the section validator and stated in <see cref="ExitResult.Method"/>.
+/// The default depth d (<see cref="SectionDefaults.ExitDepth"/>) is set by the section validator and stated in
+/// <see cref="ExitResult.Method"/>. On a sloping
+/// seepage face n is the inward normal of the face, so the gradient is normal to it; only wetted stations count.
 /// </summary>
 public static class ExitGradientCalculator
 {
@@ -33,6 +35,9 @@ public static class ExitGradientCalculator
                 double? top = sampler.Head(p + (1e-6 * d) * inward);
                 double? below = sampler.Head(p + d * inward);
                 if (top is null || below is null) continue;
+                // In an unconfined section only the wetted part of the exit surface counts: above the exit point of a
+                // seepage face the pressure is negative and no water leaves there.
+                if (section.Unconfined && top.Value - p.Y < -tolerance) continue;
                 double gradient = (below.Value - top.Value) / d;
                 var (gx, gy) = sampler.Field.GradientAt(e.Triangle, p);
                 double row = gx * inward.X + gy * inward.Y;
@@ -41,7 +46,9 @@ public static class ExitGradientCalculator
         }
         if (points.Count == 0)
         {
-            warnings.Add("Exit gradient: no station of the exit surface has soil over the averaging depth below it; no exit check made.");
+            warnings.Add(section.Unconfined
+                ? "Exit gradient: no station of the exit surface is wetted (water leaves elsewhere, e.g. into a drain); no exit check made."
+                : "Exit gradient: no station of the exit surface has soil over the averaging depth below it; no exit check made.");
             return null;
         }
         points.Sort((u, v) => u.S.CompareTo(v.S));

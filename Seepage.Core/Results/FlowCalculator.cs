@@ -25,15 +25,18 @@ public static class FlowCalculator
         var claimed = new bool[heads.Length];
         var flows = new List<BoundaryFlow>();
         // Heads first (they win shared nodes, as in FixedHeadBuilder), then drains.
-        foreach (var h in section.Heads) flows.Add(new BoundaryFlow(h.Name, "head", Sum(boundary.On(h.Along, tolerance))));
-        foreach (var d in section.Drains) flows.Add(new BoundaryFlow(d.Name, "drain", Sum(boundary.On(d.Along, tolerance))));
+        foreach (var h in section.Heads) flows.Add(new BoundaryFlow(h.Name, "head", Sum(MeshBoundary.NodesOf(boundary.On(h.Along, tolerance), quadratic))));
+        foreach (var d in section.Drains)
+            flows.Add(new BoundaryFlow(d.Name, "drain", Sum(PolylineNodes.Of(boundary, d.Along, d.Internal, tolerance, quadratic))));
+        foreach (var f in section.SeepageFaces)
+            flows.Add(new BoundaryFlow(f.Name, "seepage face", Sum(MeshBoundary.NodesOf(boundary.On(f.Along, tolerance)))));
         double balance = inflow > 0 ? (inflow - outflow) / inflow : 0;
         return (new FlowSummary(inflow, outflow, balance, flows), reactions);
 
-        double Sum(List<BoundaryEdge> edges)
+        double Sum(IEnumerable<int> nodes)
         {
             double s = 0;
-            foreach (int n in MeshBoundary.NodesOf(edges, quadratic))
+            foreach (int n in nodes)
                 if (!claimed[n]) { claimed[n] = true; s += reactions[n]; }
             return s;
         }

@@ -28,12 +28,12 @@ public sealed class GaugeRegions
         var tri = mesh.Triangles;
         _neighbours = new int[3 * mesh.TriangleCount];
         Array.Fill(_neighbours, -1);
-        var open = new Dictionary<long, int>(3 * mesh.TriangleCount / 2 + 16);
+        var open = new Dictionary<long, int>(3 * mesh.TriangleCount / 2 + 16, EdgeKey.Comparer);
         for (int t = 0; t < mesh.TriangleCount; t++)
             for (int k = 0; k < 3; k++)
             {
                 int i = tri[3 * t + k], j = tri[3 * t + (k + 1) % 3];
-                long key = ((long)Math.Min(i, j) << 32) | (uint)Math.Max(i, j);
+                long key = EdgeKey.Of(i, j);
                 if (open.Remove(key, out int other))
                 {
                     _neighbours[3 * t + k] = other / 3 == t ? -1 : other / 3;

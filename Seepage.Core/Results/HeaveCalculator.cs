@@ -47,12 +47,18 @@ public static class HeaveCalculator
             double uplift = gw * excess * width;
             double? factor = weight is { } w && uplift > 0 ? w / uplift : null;
             if (ic is null) warnings.Add($"Heave: soil '{soil.Id}' beside cutoff '{c.Name}' lacks specificGravity and voidRatio (or saturatedUnitWeight); no factor.");
-            if (section.Structures.Any(s => PolygonMath.DistanceToPolyline(new Point2(c.Tip.X + side * width / 2, top), s.Base) < section.MatchTolerance))
-                warnings.Add($"Heave: the prism beside cutoff '{c.Name}' lies under a structure; the structure's weight is not counted.");
-            bool? pass = factor is { } f ? f >= section.HeaveRequiredFactor : null;
+            // A prism topped by a structure's base is not at an exit: the uplift check governs there. Its factor is shown
+            // for information and kept out of the verdict (common practice).
+            var under = section.Structures.FirstOrDefault(s =>
+                PolygonMath.DistanceToPolyline(new Point2(c.Tip.X + side * width / 2, top), s.Base)
+                < section.MatchTolerance);
+            string? skipped = under is null ? null
+                : $"the prism beside cutoff '{c.Name}' lies under structure '{under.Name}', not at an exit; the factor (structure's weight not counted) is for information and not counted in pass.";
+            if (skipped is not null) warnings.Add("Heave: " + skipped);
+            bool? pass = factor is { } f && skipped is null ? f >= section.HeaveRequiredFactor : null;
             double from = c.Tip.X, to = c.Tip.X + side * width;
             results.Add(new HeaveResult(c.Name, depth, excess, factor, section.HeaveRequiredFactor, pass, Math.Min(from, to), Math.Max(from, to),
-                weight, uplift, top));
+                weight, uplift, top) { Skipped = skipped });
         }
         return results;
     }

@@ -50,11 +50,19 @@ public sealed record ExitResult(double MaxGradient, double AtX, double AtY, doub
 /// W′ = γ′·D·D/2 and PrismUpliftForce U = γw·h_a·D/2 (the water force on the prism, not the uplift of a structure) in kN/m (null without the soil's unit weight data); SurfaceY (m)
 /// is the elevation of the prism's top.</summary>
 public sealed record HeaveResult(string Cutoff, double Depth, double AverageExcessHead, double? Factor, double RequiredFactor,
-    bool? Pass, double PrismFromX, double PrismToX, double? EffectiveWeight, double PrismUpliftForce, double SurfaceY);
+    bool? Pass, double PrismFromX, double PrismToX, double? EffectiveWeight, double PrismUpliftForce, double SurfaceY)
+{
+    /// <summary>Why the factor is not a heave verdict (e.g. the prism lies under a structure, not at an exit); null when it is.</summary>
+    public string? Skipped { get; init; }
+}
 
 /// <summary>A creep check: (weighted) creep length in m, ratio = length / head difference, required ratio
 /// from the cited table when the soil's creep class is known.</summary>
-public sealed record CreepCheck(double WeightedLength, double Ratio, double? Required, bool? Pass, string Source);
+public sealed record CreepCheck(double WeightedLength, double Ratio, double? Required, bool? Pass, string Source)
+{
+    /// <summary>Why there is no required ratio (no creepClass, or none in the table for it); null when there is one.</summary>
+    public string? Skipped { get; init; }
+}
 
 public sealed record CreepResult(CreepCheck Lane, CreepCheck Bligh);
 

@@ -70,7 +70,9 @@ public static class StreamFunctionSolver
             double det = k.Kxx * k.Kyy - k.Kxy * k.Kxy;
             return new ConductivityTensor(k.Kxx / det, k.Kxy / det, k.Kyy / det);
         }).ToList();
-        var full = GlobalAssembler.Assemble(mesh, pattern, tensors);
+        // A triangle whose tensor is scaled by f (relative conductivity) has M scaled by 1/f.
+        var inverse = field.ElementFactors?.Select(f => 1 / f).ToArray();
+        var full = GlobalAssembler.Assemble(mesh, pattern, tensors, inverse);
         var system = LinearSystem.Condense(full, new FixedHeads(onBoundary, psi));
         var x = new double[system.Matrix.Size];
         if (x.Length > 0) LinearSolver.Solve(system.Matrix, system.Rhs, x, new SolverOptions { RelativeTolerance = StreamTolerance }, cancellation);

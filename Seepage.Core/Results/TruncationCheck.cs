@@ -9,9 +9,11 @@ namespace Seepage.Core.Results;
 /// <summary>
 /// Checks that the lateral (left and right) boundaries are far enough: each is pushed out by half its distance L
 /// from the nearest structure or cutoff (x → x ∓ L/2; vertices of outlines and polylines on that boundary move, the
-/// rest stay), the wider section is meshed and solved once, and a change of the flow by more than 1 % gives a
-/// warning (common practice: a truncated domain should not steer the answer). The two meshes differ, so changes
-/// below the discretisation error (a few tenths of a per cent) are not meaningful.
+/// rest stay), and a change of the flow by more than 1 % gives a warning (common practice: a truncated domain should
+/// not steer the answer). The change is first estimated from the one solution (<see cref="TruncationSensitivity"/>,
+/// method <c>sensitivity</c>, an upper bound at no extra solve). Where that estimate does not apply or exceeds 1 %,
+/// and a wider solve is allowed, the wider section is meshed and solved once (method <c>widerSolve</c>); the two
+/// meshes differ, so changes below the discretisation error (a few tenths of a per cent) are not meaningful there.
 /// </summary>
 public static class TruncationCheck
 {
@@ -21,8 +23,14 @@ public static class TruncationCheck
     /// <summary>Models with fewer triangles are checked automatically unless the section says otherwise.</summary>
     public const int AutomaticBelowTriangles = 20_000;
 
-    public static TruncationResult? Run(SectionModel section, double flow, int order, Func<SectionModel, Mesh> mesher,
-        SolverOptions options, List<string> warnings, CancellationToken cancellation)
+    /// <summary>Method name of the first-order estimate from the one solution.</summary>
+    public const string SensitivityMethod = "sensitivity";
+
+    /// <summary>Method name of the extra solve on the wider section.</summary>
+    public const string WiderSolveMethod = "widerSolve";
+
+    public static TruncationResult? Run(SectionModel section, FieldSolution solution, double flow, Func<SectionModel, Mesh> mesher,
+        SolverOptions options, bool widerSolveAllowed, List<string> warnings, CancellationToken cancellation)
     {
         var features = section.Structures.SelectMany(s => s.Base).Concat(section.Cutoffs.SelectMany(c => new[] { c.Top, c.Tip })).ToList();
         if (features.Count == 0 || flow <= 0) return null;
@@ -31,6 +39,15 @@ public static class TruncationCheck
         double fl = features.Min(p => p.X) - left, fr = right - features.Max(p => p.X);
         if (fl <= tol || fr <= tol) return null;
         double newLeft = left - fl / 2, newRight = right + fr / 2;
+        double? estimate = TruncationSensitivity.Estimate(section, solution, flow, left, right, fl / 2, fr / 2, tol);
+        if (estimate is { } e && (e <= WarningLevel || !widerSolveAllowed))
+        {
+            if (e > WarningLevel)
+                warnings.Add(FormattableString.Invariant(
+                    $"Truncation: pushing the lateral boundaries out by half their distance from the structures would change the flow by up to {e:P1} (first-order estimate, > 1 %); extend the section."));
+            return new TruncationResult(left, right, newLeft, newRight, flow, flow * (1 + e), e) { Method = SensitivityMethod };
+        }
+        if (!widerSolveAllowed) return null;
         Point2 Move(Point2 p) => Math.Abs(p.X - left) <= tol ? new Point2(newLeft, p.Y) : Math.Abs(p.X - right) <= tol ? new Point2(newRight, p.Y) : p;
         List<Point2> Line(IEnumerable<Point2> line) => line.Select(Move).ToList();
         var wide = section with
@@ -41,17 +58,22 @@ public static class TruncationCheck
             ExitCheck = section.ExitCheck with { Along = Line(section.ExitCheck.Along) },
             Gauges = [],
         };
-        var solution = FieldSolver.Solve(wide, mesher(wide), order, options, cancellation);
-        double wider = KeyFigures.Of(wide, solution).Flow;
+        var wideSolution = FieldSolver.Solve(wide, mesher(wide), solution.Field.Order, options, cancellation);
+        double wider = KeyFigures.Of(wide, wideSolution).Flow;
         double change = (wider - flow) / flow;
         if (Math.Abs(change) > WarningLevel)
             warnings.Add(FormattableString.Invariant(
                 $"Truncation: pushing the lateral boundaries out by half their distance from the structures changes the flow by {change:P1} (> 1 %); extend the section."));
-        return new TruncationResult(left, right, newLeft, newRight, flow, wider, change);
+        return new TruncationResult(left, right, newLeft, newRight, flow, wider, change) { Method = WiderSolveMethod };
     }
 }
 
-/// <summary>The truncation check: lateral boundaries before and after (x, m), flow on each (m³/s per m) and the
-/// relative change.</summary>
+/// <summary>The truncation check: lateral boundaries before and after (x, m), flow on each (m³/s per m; for the
+/// estimate, the flow times one plus the estimated change) and the relative change, and how it was obtained
+/// (<c>sensitivity</c> or <c>widerSolve</c>).</summary>
 public sealed record TruncationResult(double LeftX, double RightX, double ExtendedLeftX, double ExtendedRightX, double Flow,
-    double ExtendedFlow, double Change);
+    double ExtendedFlow, double Change)
+{
+    /// <summary><see cref="TruncationCheck.SensitivityMethod"/> or <see cref="TruncationCheck.WiderSolveMethod"/>.</summary>
+    public string Method { get; init; } = TruncationCheck.WiderSolveMethod;
+}

@@ -10,6 +10,7 @@ public static class ConductivityUnits
         ["cm/s"] = 0.01,
         ["m/day"] = 1.0 / 86_400,
         ["ft/day"] = 0.3048 / 86_400,
+        ["ft/min"] = 0.3048 / 60,
     };
 
     /// <summary>Smallest and largest conductivity accepted, m/s: from below intact clay and rock (about 1e-13) to above

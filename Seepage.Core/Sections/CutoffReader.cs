@@ -49,6 +49,9 @@ internal static class CutoffReader
             for (int j = i + 1; j < lines.Count; j++)
                 if (PolygonMath.ProperIntersection(lines[i].Top, lines[i].Tip, lines[j].Top, lines[j].Tip, tolerance) is not null)
                     problems.Add(new($"/cutoffs/{lines[j].Index}", $"crosses cutoff {lines[i].Index}; cutoffs must not cross."));
+                else if (SegmentOverlap.Of(lines[i].Top, lines[i].Tip, lines[j].Top, lines[j].Tip, tolerance * 10) is { } common)
+                    problems.Add(new($"/cutoffs/{lines[j].Index}", $"lies on /cutoffs/{lines[i].Index} from {common.From} to {common.To}; " +
+                        "two cutoffs must not share a stretch (give one wall once)."));
         return new(cutoffs, permeable, permeableIndex);
     }
 

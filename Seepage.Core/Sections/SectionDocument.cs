@@ -11,9 +11,14 @@ public sealed record SectionDocument
     public string? Title { get; init; }
     /// <summary>Free text describing the scenario (optional).</summary>
     public string? Description { get; init; }
-    /// <summary>Unit of kx, ky: "m/s" (default), "cm/s", "m/day" or "ft/day".</summary>
+    /// <summary>Unit of kx, ky: "m/s" (default), "cm/s", "m/day", "ft/day" or "ft/min".</summary>
     public string? ConductivityUnit { get; init; }
-    /// <summary>Unit weight of water, kN/m³. Default 9.81.</summary>
+    /// <summary>Unit of every coordinate, size, depth and head: "m" (default) or "ft". Converted to metres at validation.</summary>
+    public string? LengthUnit { get; init; }
+    /// <summary>Unit of waterUnitWeight and the saturated unit weights: "kN/m3" (default) or "pcf" (lbf/ft³).</summary>
+    public string? UnitWeightUnit { get; init; }
+    /// <summary>Unit weight of water in unitWeightUnit (kN/m³ by default). Default 9.81 kN/m³.</summary>
+    [InUnitWeightUnit]
     public double? WaterUnitWeight { get; init; }
     public List<SoilDocument>? Soils { get; init; }
     public List<ZoneDocument>? Zones { get; init; }
@@ -25,6 +30,7 @@ public sealed record SectionDocument
     public HeaveCheckDocument? HeaveCheck { get; init; }
     public MeshDocument? Mesh { get; init; }
     /// <summary>Length of the structure along its axis, metres (optional; gives total flow).</summary>
+    [InLengthUnit]
     public double? StructureLength { get; init; }
     /// <summary>Flow gauges: polylines across the section whose crossing flow (m³/s per m) is reported (optional).</summary>
     public List<GaugeDocument>? Gauges { get; init; }
@@ -32,7 +38,18 @@ public sealed record SectionDocument
     /// distance from the structures tells whether the truncation changes the flow by more than 1% (default false;
     /// done automatically for models of fewer than 20,000 triangles).</summary>
     public bool? TruncationCheck { get; init; }
+    /// <summary>When true the upper limit of the saturated flow (the phreatic surface) is unknown and found by the
+    /// analysis; soil above it carries no flow. Default false (confined flow, every soil saturated).</summary>
+    public bool? Unconfined { get; init; }
+    /// <summary>Boundary polylines where water may leave at atmospheric pressure (unconfined sections).</summary>
+    public List<SeepageFaceDocument>? SeepageFaces { get; init; }
+    /// <summary>Flow-net drawing options (optional).</summary>
+    public FlowNetDocument? FlowNet { get; init; }
+    /// <summary>Title block of the design memo: project, job number, prepared/checked by, revision (optional).</summary>
+    public TitleBlockDocument? TitleBlock { get; init; }
 
+    /// <summary>Extension members (names starting with "x-"): kept with the posted section, ignored by the analysis.
+    /// Any other unknown member is refused by <see cref="SectionParser"/>.</summary>
     [JsonExtensionData]
     public Dictionary<string, object>? Extra { get; init; }
 }
@@ -48,6 +65,7 @@ public sealed record SoilDocument
     public double? BeddingAngle { get; init; }
     public double? SpecificGravity { get; init; }
     public double? VoidRatio { get; init; }
+    [InUnitWeightUnit]
     public double? SaturatedUnitWeight { get; init; }
     public string? CreepClass { get; init; }
 }
@@ -58,6 +76,7 @@ public sealed record ZoneDocument
 {
     public string? Soil { get; init; }
     public List<double[]>? Outline { get; init; }
+    [InLengthUnit]
     public double? Size { get; init; }
 }
 
@@ -74,6 +93,7 @@ public sealed record CutoffDocument
     public string? Name { get; init; }
     public double[]? Top { get; init; }
     public double[]? Tip { get; init; }
+    [InLengthUnit]
     public double? Thickness { get; init; }
     public double? Kx { get; init; }
 }
@@ -83,6 +103,7 @@ public sealed record HeadDocument
 {
     public string? Name { get; init; }
     public List<double[]>? Along { get; init; }
+    [InLengthUnit]
     public double? Total { get; init; }
 }
 
@@ -98,6 +119,7 @@ public sealed record DrainDocument
 public sealed record ExitCheckDocument
 {
     public List<double[]>? Along { get; init; }
+    [InLengthUnit]
     public double? Depth { get; init; }
     public double? RequiredFactor { get; init; }
 }
@@ -112,6 +134,7 @@ public sealed record HeaveCheckDocument
 /// minimum angle in degrees (default 28).</summary>
 public sealed record MeshDocument
 {
+    [InLengthUnit]
     public double? Size { get; init; }
     public double? MinAngle { get; init; }
     /// <summary>Polynomial order of the elements: 1 (linear triangles, default) or 2 (quadratic triangles with

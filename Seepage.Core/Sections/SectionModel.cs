@@ -39,6 +39,21 @@ public sealed record SectionModel(
     /// Null means "automatically for small models".</summary>
     public bool? TruncationCheck { get; init; }
 
+    /// <summary>Whether the phreatic surface is unknown (unconfined flow). Default false.</summary>
+    public bool Unconfined { get; init; }
+
+    /// <summary>Potential seepage faces: boundary polylines (m) where water may leave at h = y.</summary>
+    public IReadOnlyList<SeepageFace> SeepageFaces { get; init; } = [];
+
+    /// <summary>Head drops Nd of the flow net from <c>flowNet.headDrops</c>; null chooses Nd for square cells.</summary>
+    public int? FlowNetHeadDrops { get; init; }
+
+    /// <summary>The section document as analysed: in metres and kN/m³, every default the analysis uses filled in.</summary>
+    public SectionDocument? Analysed { get; init; }
+
+    /// <summary>Each value the analysis used for a member with a default, and whether it was given or defaulted.</summary>
+    public IReadOnlyList<Assumption> Assumptions { get; init; } = [];
+
     /// <summary>Tolerance of the input geometry, metres (<see cref="GeometricTolerance.Input"/> of the extent).</summary>
     public double Tolerance => GeometricTolerance.Input * Extent;
 
@@ -68,7 +83,12 @@ public sealed record Cutoff(string Name, Point2 Top, Point2 Tip)
 public sealed record HeadBoundary(string Name, IReadOnlyList<Point2> Along, double Total);
 
 /// <summary>A drain along a boundary polyline: pore pressure zero, so total head equals elevation.</summary>
-public sealed record DrainBoundary(string Name, IReadOnlyList<Point2> Along);
+public sealed record DrainBoundary(string Name, IReadOnlyList<Point2> Along)
+{
+    /// <summary>True when the drain runs (in part) inside the domain rather than along its boundary: an internal
+    /// constraint of the mesh taking water from both sides (a chimney filter, a blanket on a zone interface).</summary>
+    public bool Internal { get; init; }
+}
 
 /// <summary>The exit check: exit surface (polyline, m), averaging depth (m), required factor against piping.</summary>
 public sealed record ExitCheck(IReadOnlyList<Point2> Along, double Depth, double RequiredFactor, bool AlongGiven);

@@ -20,14 +20,12 @@ public static class SectionValidator
         var warnings = new List<string>();
         var reader = new PointReader(problems);
 
-        if (doc.Extra is { Count: > 0 })
-            foreach (var key in doc.Extra.Keys)
-                warnings.Add($"Unknown member '{key}' at the top level was ignored.");
-
-        double unitFactor = 1;
-        string unit = doc.ConductivityUnit ?? "m/s";
-        if (!ConductivityUnits.ToMetresPerSecond.TryGetValue(unit, out unitFactor))
-            problems.Add(new("/conductivityUnit", $"'{unit}' is not a known unit; use one of {string.Join(", ", ConductivityUnits.ToMetresPerSecond.Keys)}."));
+        var posted = doc;
+        doc = SectionUnits.ToSi(doc, problems);
+        // An unknown unit is one problem: NaN keeps the conductivity range checks from adding follow-on ones.
+        string? unit = SectionEnumerations.Read(doc.ConductivityUnit, "m/s", SectionEnumerations.ConductivityUnits,
+            "/conductivityUnit", problems);
+        double unitFactor = unit is null ? double.NaN : ConductivityUnits.ToMetresPerSecond[unit];
 
         double gammaW = doc.WaterUnitWeight ?? SectionDefaults.WaterUnitWeight;
         if (!double.IsFinite(gammaW) || gammaW < 5 || gammaW > 15)
@@ -36,7 +34,8 @@ public static class SectionValidator
         var soils = ReadSoils(doc.Soils, unitFactor, problems);
         var zones = ReadZones(doc.Zones, soils, reader, problems, warnings);
         int vertexCount = (doc.Zones?.Sum(z => z?.Outline?.Count ?? 0) ?? 0) + (doc.Heads?.Sum(h => h?.Along?.Count ?? 0) ?? 0)
-            + (doc.Drains?.Sum(h => h?.Along?.Count ?? 0) ?? 0) + (doc.Structures?.Sum(s => s?.Base?.Count ?? 0) ?? 0)
+            + (doc.Drains?.Sum(h => h?.Along?.Count ?? 0) ?? 0) + (doc.SeepageFaces?.Sum(f => f?.Along?.Count ?? 0) ?? 0)
+            + (doc.Structures?.Sum(s => s?.Base?.Count ?? 0) ?? 0)
             + 2 * (doc.Cutoffs?.Count ?? 0);
         if (vertexCount > MaxVertices)
             problems.Add(new("", $"has {vertexCount} vertices; at most {MaxVertices} are accepted."));
@@ -55,26 +54,42 @@ public static class SectionValidator
             "the base polyline", domain, tolerance, reader, problems)
             .Where(x => x.Line is not null).Select(x => new Structure(x.Name, x.Line!)).ToList();
         var heads = ReadHeads(doc.Heads, domain, tolerance, reader, problems);
+        // A drain may also run inside the domain (a chimney filter, a blanket on a zone interface): the mesher
+        // carries it as an internal constraint and it takes water from both sides.
         var drains = ReadPolylines(doc.Drains?.Select(d => d is null ? null : Entry(d.Name, d.Along)).ToList(), "/drains", "along", "drain",
-            "the drain polyline", domain, tolerance, reader, problems)
-            .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)).ToList();
+            "the drain polyline", domain, tolerance, reader, problems, mayRunInside: true)
+            .Where(x => x.Line is not null).Select(x => new DrainBoundary(x.Name, x.Line!)
+            { Internal = domain is not null && !domain.PolylineOnBoundary(x.Line!, tolerance * 10) }).ToList();
+        var faces = ReadPolylines(doc.SeepageFaces?.Select(f => f is null ? null : Entry(f.Name, f.Along)).ToList(), "/seepageFaces",
+            "along", "seepage face", "the seepage face polyline", domain, tolerance, reader, problems)
+            .Where(x => x.Line is not null).Select(x => new SeepageFace(x.Name, x.Line!)).ToList();
+        bool unconfined = doc.Unconfined ?? false;
+        if (!unconfined && doc.SeepageFaces is { Count: > 0 })
+            problems.Add(new("/seepageFaces", "needs \"unconfined\": true; a confined section has no seepage face (use a drain)."));
+        BoundaryConflictCheck.Check(doc, tolerance * 10, problems);
         var cutoffSet = CutoffReader.Read(doc.Cutoffs, domain, tolerance, unitFactor, reader, problems);
         var cutoffs = cutoffSet.Cutoffs;
 
-        if (doc.Heads is not null && heads.Count > 0 && drains.Count == 0 && heads.Select(h => h.Total).Distinct().Count() == 1
+        if (doc.Heads is not null && heads.Count > 0 && drains.Count == 0 && faces.Count == 0 && heads.Select(h => h.Total).Distinct().Count() == 1
             && problems.All(p => !p.Pointer.StartsWith("/heads", StringComparison.Ordinal)))
             problems.Add(new("/heads", $"every fixed head is {heads[0].Total} m and there is no drain: nothing drives a flow."));
 
-        var exit = ReadExit(doc.ExitCheck, heads, domain, tolerance, reader, problems);
+        // An unconfined section's water leaves through its seepage faces: the exit check defaults to the first one.
+        var exitDefault = unconfined && faces.Count > 0 ? faces[0].Along : heads.Count > 0 ? heads.MinBy(h => h.Total)!.Along : null;
+        var exit = ReadExit(doc.ExitCheck, exitDefault, domain, tolerance, reader, problems);
+        ExitSurfaceCheck.Check(doc, exit, heads, drains, tolerance, problems);
         double heaveFactor = doc.HeaveCheck?.RequiredFactor ?? SectionDefaults.HeaveRequiredFactor;
         if (!double.IsFinite(heaveFactor) || heaveFactor <= 0)
             problems.Add(new("/heaveCheck/requiredFactor", "must be a positive number."));
         var mesh = ReadMesh(doc.Mesh, zones, cutoffs, domain, problems);
+        if (unconfined && mesh is { Order: 2 })
+            problems.Add(new("/mesh/order", "an unconfined section is solved with linear triangles (order 1) only."));
 
         var gauges = ReadGauges(doc.Gauges, reader, problems);
+        int? headDrops = FlowNetReader.HeadDrops(doc.FlowNet, problems);
 
-        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0))
-            problems.Add(new("/structureLength", "must be a positive length in metres."));
+        if (doc.StructureLength is { } len && (!double.IsFinite(len) || len <= 0 || len > PointReader.LargestCoordinate))
+            problems.Add(new("/structureLength", "must be a positive length in metres, at most 1,000,000 m."));
 
         if (problems.Count > 0 || zones is null || exit is null || mesh is null)
             return new ValidationOutcome(null, problems);
@@ -86,8 +101,13 @@ public static class SectionValidator
         }
 
         var model = new SectionModel(doc.Title ?? "Untitled section", gammaW, soils, zones, structures, cutoffs, heads, drains,
-            exit, heaveFactor, mesh, doc.StructureLength, warnings) { Gauges = gauges, TruncationCheck = doc.TruncationCheck };
-        return new ValidationOutcome(model, problems);
+            exit, heaveFactor, mesh, doc.StructureLength, warnings)
+        {
+            Gauges = gauges, TruncationCheck = doc.TruncationCheck, Unconfined = unconfined, SeepageFaces = faces,
+            FlowNetHeadDrops = headDrops,
+        };
+        var (analysed, assumptions) = SectionAssumptions.Build(doc, posted, model, unit!, warnings);
+        return new ValidationOutcome(model with { Analysed = analysed, Assumptions = assumptions }, problems);
     }
 
     private static List<Soil> ReadSoils(List<SoilDocument>? docs, double unitFactor, List<SectionProblem> problems)
@@ -113,8 +133,10 @@ public static class SectionValidator
             if (s.SpecificGravity is { } gs && (!double.IsFinite(gs) || gs <= 1 || gs > 5)) problems.Add(new($"{at}/specificGravity", "must lie between 1 and 5."));
             if (s.VoidRatio is { } e && (!double.IsFinite(e) || e <= 0 || e > 10)) problems.Add(new($"{at}/voidRatio", "must lie between 0 and 10."));
             if (s.SaturatedUnitWeight is { } gsat && (!double.IsFinite(gsat) || gsat <= 0)) problems.Add(new($"{at}/saturatedUnitWeight", "must be a positive unit weight in kN/m³."));
+            string? creepClass = s.CreepClass is null ? null
+                : SectionEnumerations.Read(s.CreepClass, "", SectionEnumerations.CreepClasses, $"{at}/creepClass", problems);
             soils.Add(new Soil(s.Id ?? $"soil {i}", kx * unitFactor, ky * unitFactor, angle, s.SpecificGravity, s.VoidRatio,
-                s.SaturatedUnitWeight, s.CreepClass));
+                s.SaturatedUnitWeight, creepClass));
         }
         return soils;
     }
@@ -154,7 +176,7 @@ public static class SectionValidator
     // (JSON null in the list) is reported once, at the item.
     private static List<(string Name, List<Point2>? Line)> ReadPolylines(List<(string? Name, List<double[]>? Line)?>? docs,
         string collection, string member, string kind, string what, Domain? domain, double tolerance, PointReader reader,
-        List<SectionProblem> problems)
+        List<SectionProblem> problems, bool mayRunInside = false)
     {
         var result = new List<(string, List<Point2>?)>();
         if (docs is null) return result;
@@ -170,8 +192,11 @@ public static class SectionValidator
             var line = reader.Polyline(item.Line, at, 2, what);
             result.Add((item.Name ?? $"{kind} {i + 1}", line));
             if (line is null) continue;
-            if (domain is not null && !domain.PolylineOnBoundary(line, tolerance * 10))
+            if (domain is null || domain.PolylineOnBoundary(line, tolerance * 10)) continue;
+            if (!mayRunInside)
                 problems.Add(new(at, $"does not lie on the boundary of the zones; a {kind} must run along the edge of the domain."));
+            else if (Enumerable.Range(0, line.Count - 1).Any(k => !domain.SegmentInside(line[k], line[k + 1], tolerance * 10)))
+                problems.Add(new(at, $"leaves the zones; a {kind} must run along the edge of the domain or inside it."));
         }
         return result;
     }
@@ -200,7 +225,7 @@ public static class SectionValidator
         return heads;
     }
 
-    private static ExitCheck? ReadExit(ExitCheckDocument? doc, List<HeadBoundary> heads, Domain? domain, double tolerance,
+    private static ExitCheck? ReadExit(ExitCheckDocument? doc, IReadOnlyList<Point2>? defaultAlong, Domain? domain, double tolerance,
         PointReader reader, List<SectionProblem> problems)
     {
         double depth = doc?.Depth ?? SectionDefaults.ExitDepth;
@@ -214,7 +239,7 @@ public static class SectionValidator
             if (along is not null && domain is not null && !domain.PolylineOnBoundary(along, tolerance * 10))
                 problems.Add(new("/exitCheck/along", "does not lie on the boundary of the zones."));
         }
-        else along = heads.Count > 0 ? heads.MinBy(h => h.Total)!.Along : null;
+        else along = defaultAlong;
         return along is null ? null : new ExitCheck(along, depth, required, doc?.Along is not null);
     }
 

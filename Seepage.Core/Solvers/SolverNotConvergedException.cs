@@ -9,4 +9,7 @@ public sealed class SolverNotConvergedException(string method, int iterations, d
     public int Iterations { get; } = iterations;
     public double Residual { get; } = residual;
     public double Tolerance { get; } = tolerance;
+
+    /// <summary>Why the solve stopped, e.g. "iteration cap reached" (NaN residuals above mean "not measured").</summary>
+    public string Reason { get; } = reason;
 }

@@ -28,7 +28,12 @@ public static class StudyCsv
                     if (SheetGrid.IsBlankCell(grid.Rows[r][j])) continue;
                     string pointer = CsvText.Format(grid.Rows[r][j]).Trim();
                     if (JsonPointer.Tokens(pointer) is not { Count: > 0 })
-                        problems.Add(new ImportProblem(cell(j), $"'{pointer}' is not a JSON pointer into the section (RFC 6901), e.g. /cutoffs/1/tip/1."));
+                        problems.Add(new ImportProblem(cell(j), $"'{SafeText.Of(pointer)}' is not a JSON pointer into the section (RFC 6901), e.g. /cutoffs/1/tip/1."));
+                    else if (pointers.FindIndex(p => p.Pointer == pointer) is var first and >= 0)
+                        problems.Add(new ImportProblem(cell(j),
+                            $"repeats the column {new CellRef(grid.Name, r + 1, pointers[first].Column + 1)} ('{SafeText.Of(pointer)}'); each member is varied in one column."));
+                    else if (Sections.SectionContract.CheckPointer(pointer) is { } why)
+                        problems.Add(new ImportProblem(cell(j), $"'{SafeText.Of(pointer)}' {why}"));
                     else pointers.Add((j, pointer));
                 }
                 if (pointers.Count == 0 && problems.Count == 0)
@@ -57,7 +62,7 @@ public static class StudyCsv
         if (text is "true" or "false") return JsonValue.Create(text == "true");
         if (text.Length > 0 && text[0] is '[' or '{' or '"')
         {
-            try { return JsonNode.Parse(text); }
+            try { return JsonNode.Parse(text, documentOptions: new JsonDocumentOptions { AllowDuplicateProperties = false }); }
             catch (JsonException) { }
         }
         return JsonValue.Create(text);

@@ -13,7 +13,8 @@ namespace Seepage.Core.Studies;
 /// <param name="ExitRequiredFactor">Required factor against piping.</param>
 /// <param name="HeaveFactor">Smallest heave factor over the cutoffs (Terzaghi's prism), null without cutoffs or soil data.</param>
 /// <param name="HeaveRequiredFactor">Required factor against heave.</param>
-/// <param name="Pass">True when every check with a factor passes, false when one fails, null when none has a factor.</param>
+/// <param name="Pass">True when every check with a verdict (exit, heave, Lane, Bligh) passes, false when one fails, null when none
+/// has a verdict; <see cref="PassCovers"/> names the checks it covers.</param>
 /// <param name="Seconds">Wall time of the alternative's analysis, s.</param>
 /// <param name="SectionJson">The changed section document, as analysed (JSON).</param>
 public sealed record StudyRow(
@@ -32,4 +33,19 @@ public sealed record StudyRow(
     string? SectionJson)
 {
     public bool Analysed => Problems.Count == 0 && Flow is not null;
+
+    /// <summary>Verdict of each check (exit, heave, lane, bligh), null where it gave none.</summary>
+    public bool? ExitPass { get; init; }
+
+    /// <inheritdoc cref="ExitPass"/>
+    public bool? HeavePass { get; init; }
+
+    /// <inheritdoc cref="ExitPass"/>
+    public bool? LanePass { get; init; }
+
+    /// <inheritdoc cref="ExitPass"/>
+    public bool? BlighPass { get; init; }
+
+    /// <summary>The checks <see cref="Pass"/> covers: those of exit, heave, lane, bligh that gave a verdict.</summary>
+    public IReadOnlyList<string> PassCovers { get; init; } = [];
 }

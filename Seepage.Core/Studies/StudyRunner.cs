@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using System.Text.Json.Nodes;
 using Seepage.Core.Meshing;
+using Seepage.Core.Results;
 using Seepage.Core.Sections;
 using Seepage.Core.Solvers;
 
@@ -37,7 +38,7 @@ public static class StudyRunner
         var section = baseSection.DeepClone();
         var problems = new List<SectionProblem>();
         foreach (var (pointer, value) in alternative.Changes)
-            if (JsonPointer.Set(section, pointer, value) is { } error)
+            if ((SectionContract.CheckPointer(pointer) ?? JsonPointer.Set(section, pointer, value)) is { } error)
                 problems.Add(new SectionProblem(pointer, error));
         string json = section.ToJsonString();
         if (problems.Count > 0) return (Failed(index, alternative.Name, problems, clock, json), null);
@@ -46,6 +47,7 @@ public static class StudyRunner
         if (document is null) return (Failed(index, alternative.Name, parseProblems, clock, json), null);
         var outcome = SectionValidator.Validate(document);
         if (!outcome.IsValid) return (Failed(index, alternative.Name, outcome.Problems, clock, json), null);
+        if (options?.Admission?.Invoke(outcome.Model!) is { } refused) return (Failed(index, alternative.Name, [refused], clock, json), null);
         try
         {
             var result = Analysis.Run(outcome.Model!, options, cancellation);
@@ -63,19 +65,26 @@ public static class StudyRunner
         {
             return (Failed(index, alternative.Name, [new SectionProblem("", ex.Message)], clock, json), null);
         }
+        catch (NonFiniteResultException ex)
+        {
+            return (Failed(index, alternative.Name, [new SectionProblem("", ex.Message)], clock, json), null);
+        }
     }
 
     /// <summary>The key figures of one analysis.</summary>
     public static StudyRow Figures(int index, string name, AnalysisResult r, Stopwatch clock, string? json)
     {
-        var heave = r.Heave.Where(h => h.Factor is not null).OrderBy(h => h.Factor).FirstOrDefault();
-        var verdicts = new List<bool?> { r.Exit?.Pass };
-        verdicts.AddRange(r.Heave.Select(h => h.Pass));
-        var known = verdicts.Where(v => v is not null).Select(v => v!.Value).ToList();
+        // The smallest heave factor among the prisms that are heave verdicts (not those under a structure).
+        var heave = r.Heave.Where(h => h.Factor is not null && h.Skipped is null).OrderBy(h => h.Factor).FirstOrDefault();
+        var checks = CheckSummary.Of(r);
+        var (pass, covers) = CheckSummary.Overall(checks);
+        bool? Verdict(string check) => checks.First(c => c.Check == check).Pass;
         return new StudyRow(index, name, [], r.Flow.PerMetre, r.Uplift.Count == 0 ? null : r.Uplift.Sum(u => u.Force),
             r.Exit?.MaxGradient, r.Exit?.Factor, r.Exit?.RequiredFactor, heave?.Factor,
-            heave?.RequiredFactor ?? r.Heave.FirstOrDefault()?.RequiredFactor, known.Count == 0 ? null : known.All(v => v),
-            clock.Elapsed.TotalSeconds, json);
+            heave?.RequiredFactor ?? r.Heave.FirstOrDefault()?.RequiredFactor, pass, clock.Elapsed.TotalSeconds, json)
+        {
+            ExitPass = Verdict("exit"), HeavePass = Verdict("heave"), LanePass = Verdict("lane"), BlighPass = Verdict("bligh"), PassCovers = covers,
+        };
     }
 
     private static StudyRow Failed(int index, string name, IReadOnlyList<SectionProblem> problems, Stopwatch clock, string json) =>

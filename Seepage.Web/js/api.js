@@ -16,6 +16,7 @@ async function call(path, options = {}) {
   try {
     response = await fetch(`${BASE}/${path}`, options);
   } catch (e) {
+    if (e.name === 'AbortError') throw e;
     throw new ApiError(0, null, `The Seepage service could not be reached (${e.message}).`);
   }
   const type = response.headers.get('content-type') || '';
@@ -35,9 +36,11 @@ function describeStatus(status, body) {
   return `The service answered ${status}${text}.`;
 }
 
-function postJson(path, text) {
-  return call(path, { method: 'POST', headers: { 'content-type': 'application/json' }, body: text });
+function postJson(path, text, signal) {
+  return call(path, { method: 'POST', headers: { 'content-type': 'application/json' }, body: text, signal });
 }
+
+const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 
 export const api = {
   /** [{ name, title, description }] */
@@ -46,10 +49,23 @@ export const api = {
   example: name => call(`examples/${encodeURIComponent(name)}`),
   /** { valid, warnings } or ApiError(400) with field errors. */
   validate: text => postJson('sections/validate', text),
-  /** The analysis result document (201). */
-  analyse: text => postJson('analyses', text),
+  /** The analysis result document (201); `signal` aborts the request (the service stops the work). */
+  analyse: (text, signal) => postJson('analyses', text, signal),
+  /** A section document read from a workbook (.xlsx) or CSV file; ApiError(400) keyed by cell. */
+  importSection: file => call('sections/import', {
+    method: 'POST', body: file,
+    headers: { 'content-type': /\.xlsx$/i.test(file.name) ? XLSX : 'text/csv' },
+  }),
   /** The result document of a stored analysis. */
   analysis: id => call(`analyses/${encodeURIComponent(id)}`),
+  /** Starts a study in the background: 202 with the study (id, status, done/total). */
+  startStudy: (request, signal) => postJson('studies?background=true', JSON.stringify(request), signal),
+  /** A study's state and the rows finished so far. */
+  study: (id, signal) => call(`studies/${encodeURIComponent(id)}`, { signal }),
+  /** Asks the service to stop and remove a study (answers 404/405 where the service cannot). */
+  deleteStudy: id => call(`studies/${encodeURIComponent(id)}`, { method: 'DELETE' }),
+  /** The section document of a stored analysis, as posted. */
+  section: id => call(`analyses/${encodeURIComponent(id)}/section`),
   /** Field data for drawing (nodes, triangles, heads, equipotentials, flow lines, walls). */
-  field: id => call(`analyses/${encodeURIComponent(id)}/field`),
+  field: (id, signal) => call(`analyses/${encodeURIComponent(id)}/field`, { signal }),
 };

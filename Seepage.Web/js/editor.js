@@ -32,6 +32,14 @@ export class SectionEditor {
     this.onChange(text);
   }
 
+  /** Replaces the text written by the form, keeping the scroll position and without notifying the page. */
+  replaceText(text) {
+    const top = this.area.scrollTop;
+    this.area.value = text;
+    this.area.scrollTop = top;
+    this.renderGutter();
+  }
+
   /** Marks 1-based lines that have problems. */
   markLines(lines) {
     this.badLines = new Set(lines.filter(l => l !== null && l !== undefined));
@@ -92,7 +100,8 @@ export class SectionEditor {
       e.preventDefault();
       off();
       const file = e.dataTransfer?.files?.[0];
-      if (file) this.setText(await file.text());
+      if (file && this.onDropFile) await this.onDropFile(file);
+      else if (file) this.setText(await file.text());
     });
   }
 }

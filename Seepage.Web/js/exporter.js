@@ -66,7 +66,10 @@ export function slug(text) {
   return (text || 'section').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'section';
 }
 
+// Text that a spreadsheet would read as a formula (=, +, -, @, tab, CR first) gets a leading apostrophe (OWASP,
+// "CSV Injection"); numbers are written by csvNumber and stay numbers.
 function quote(text) {
-  const t = String(text);
-  return /[",\n]/.test(t) ? `"${t.replace(/"/g, '""')}"` : t;
+  let t = String(text);
+  if (/^[=+\-@\t\r]/.test(t) && !Number.isFinite(Number(t))) t = `'${t}`;
+  return /[",\r\n]/.test(t) ? `"${t.replace(/"/g, '""')}"` : t;
 }

@@ -45,6 +45,7 @@ export function drawEquipotentials(layer, labels, field) {
   for (const eq of field.equipotentials ?? []) {
     for (const path of eq.paths ?? []) {
       if (path.length < 2) continue;
+      layer.append(svg('path', { class: 'equipotential-casing', d: pathData(path) }));
       layer.append(svg('path', { class: 'equipotential', d: pathData(path), 'data-head': eq.head },
         svg('title', {}, `equipotential h = ${fixed(eq.head, 2)} m`)));
     }
@@ -71,7 +72,7 @@ export function drawFlowLines(layer, field) {
 export function drawWalls(layer, field) {
   for (const wall of field.walls ?? []) {
     if (wall.length < 2) continue;
-    layer.append(svg('path', { class: 'wall-casing', d: pathData(wall) }), svg('path', { class: 'wall', d: pathData(wall) }));
+    layer.append(svg('path', { class: 'wall-casing field-wall', d: pathData(wall) }), svg('path', { class: 'wall field-wall', d: pathData(wall) }));
   }
 }
 

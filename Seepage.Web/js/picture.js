@@ -13,7 +13,7 @@ export class Picture {
   constructor(box) {
     this.box = box;
     this.root = svg('svg', { xmlns: 'http://www.w3.org/2000/svg', role: 'img', id: 'picture',
-      'aria-label': 'Section picture. Keys: plus and minus zoom, 0 fits, arrows pan.' });
+      'aria-label': 'Section picture. Keys: plus and minus zoom, 0 fits the structure, a shows all, arrows pan.' });
     this.root.append(svg('style', {}, PICTURE_STYLE));
     this.world = svg('svg', { class: 'world', preserveAspectRatio: 'xMidYMid meet', overflow: 'hidden' });
     this.hatch = concreteHatch();
@@ -27,7 +27,7 @@ export class Picture {
     // Labels live in pixel space (projected on every view change): browsers clamp tiny font sizes, so text
     // in metre units would not scale correctly.
     this.clipRect = svg('rect');
-    this.overlay = svg('g', { class: 'overlay', 'clip-path': 'url(#world-clip)' });
+    this.overlay = svg('g', { class: 'overlay', 'clip-path': 'url(#world-clip)', 'pointer-events': 'none' });
     for (const name of OVERLAYS) {
       const g = svg('g', { class: `labels ${name}`, 'data-layer': name });
       this.layers[name] = g;
@@ -52,6 +52,9 @@ export class Picture {
   /** Registers fn(scale) called after every zoom, pan or resize; scale is pixels per metre. */
   onView(fn) { this.listeners.push(fn); }
 
+  /** Registers fn(pointer) called when a drawn member with a JSON pointer (a cutoff, a head line) is clicked. */
+  onPick(fn) { this.pickListeners = [...(this.pickListeners ?? []), fn]; }
+
   /** Registers fn() called after the picture changed size (the caller redraws size-dependent parts). */
   onResize(fn) { this.resizeListeners.push(fn); }
 
@@ -71,7 +74,9 @@ export class Picture {
     const b = this.bounds;
     const aspect = (b.maxY - b.minY) / Math.max(1e-9, b.maxX - b.minX);
     const innerW = width - MARGIN.left - MARGIN.right;
-    const innerH = Math.min(560, Math.max(300, innerW * aspect * 1.15));
+    // Tall enough for the section, short enough that the figures beside and the caption below stay on screen.
+    const cap = Math.max(260, Math.min(560, (window.innerHeight || 900) - 340));
+    const innerH = Math.min(cap, Math.max(260, innerW * aspect * 1.15));
     const height = innerH + MARGIN.top + MARGIN.bottom;
     this.size = { width, height, innerW, innerH };
     for (const [k, v] of Object.entries({ width, height, viewBox: `0 0 ${width} ${height}` })) this.root.setAttribute(k, v);
@@ -84,9 +89,19 @@ export class Picture {
     else this.applyView();
   }
 
+  /** Sets the region "Fit" frames (metres; the structure and where the head changes); null frames everything. */
+  setFocus(focus) {
+    this.focus = focus;
+    this.fit();
+  }
+
+  /** Frames the focus region (or the whole section when there is none). */
+  fit() { this.frame(this.focus ?? this.bounds); }
+
   /** Shows the whole section with a small margin. */
-  fit() {
-    const b = this.bounds;
+  fitAll() { this.frame(this.bounds); }
+
+  frame(b) {
     const { innerW, innerH } = this.size;
     let w = (b.maxX - b.minX) * 1.04;
     let h = (b.maxY - b.minY) * 1.08;
@@ -196,6 +211,7 @@ export class Picture {
       if (e.key === '+' || e.key === '=') this.zoom(1 / 1.25);
       else if (e.key === '-' || e.key === '_') this.zoom(1.25);
       else if (e.key === '0') this.fit();
+      else if (e.key === 'a') this.fitAll();
       else if (pan) { this.view = { ...v, x: v.x + pan[0] * v.w, y: v.y + pan[1] * v.h }; this.applyView(); }
       else return;
       e.preventDefault();
@@ -209,7 +225,8 @@ export class Picture {
     let drag = null;
     this.root.addEventListener('pointerdown', e => {
       if (e.button !== 0) return;
-      drag = { x: e.clientX, y: e.clientY, view: { ...this.view } };
+      const picked = e.target.closest?.('[data-pointer]')?.getAttribute('data-pointer');
+      drag = { x: e.clientX, y: e.clientY, view: { ...this.view }, picked };
       this.root.setPointerCapture(e.pointerId);
       this.root.classList.add('panning');
     });
@@ -220,7 +237,12 @@ export class Picture {
       this.applyView();
     });
     const end = () => { drag = null; this.root.classList.remove('panning'); };
-    this.root.addEventListener('pointerup', end);
+    this.root.addEventListener('pointerup', e => {
+      // A click (no drag) on a member selects it in the form.
+      if (drag?.picked && Math.hypot(e.clientX - drag.x, e.clientY - drag.y) < 5)
+        for (const fn of this.pickListeners ?? []) fn(drag.picked);
+      end();
+    });
     this.root.addEventListener('pointercancel', end);
   }
 

@@ -4,9 +4,11 @@
 import { clear, html } from './dom.js';
 import { fixed, sig } from './format.js';
 import { sectionBounds, drawSoilFill, drawZoneOutlines, drawFeatures, drawSoilKey } from './section-view.js';
+import { drawUnconfined } from './unconfined-view.js';
 import { headRange, drawHeadFill, drawMesh, drawEquipotentials, drawFlowLines, drawWalls, drawExitMarker, drawHeadLegend } from './field-view.js';
 import { FieldProbe } from './probe.js';
 import { drawVelocityArrows } from './arrows.js';
+import { focusBounds } from './focus.js';
 
 export class Scene {
   constructor(picture, { probeEl, flowNetEl, toggles }) {
@@ -49,8 +51,11 @@ export class Scene {
     if (!section) return;
     const bounds = sectionBounds(section);
     const key = JSON.stringify(bounds);
-    if (key !== this.boundsKey) { this.boundsKey = key; p.setBounds(bounds); }
     const field = this.field;
+    if (key !== this.boundsKey) { this.boundsKey = key; p.setBounds(bounds); }
+    const focus = focusBounds(section, field, bounds);
+    const focusKey = JSON.stringify(focus) + (field ? 'field' : '');
+    if (focusKey !== this.focusKey) { this.focusKey = focusKey; p.setFocus(focus); }
     const t = this.toggles;
     const range = field ? headRange(field) : null;
     if (field && t.fill.checked) drawHeadFill(p.layers.fill, field, range);
@@ -72,6 +77,7 @@ export class Scene {
     else drawSoilKey(p.legend, section);
     p.applyView();
     this.renderFlowNet();
+    if (field?.unconfined) drawUnconfined(p.layers.features, this.flowNetEl, field, section);
     this.probeEl.textContent = this.idleText();
   }
 
@@ -79,10 +85,11 @@ export class Scene {
     clear(this.flowNetEl);
     const net = this.field?.flowNet;
     if (!net) return;
-    this.flowNetEl.append(html('p', { id: 'flow-net-counts' },
-      html('strong', {}, 'Flow net: '),
-      `Nf = ${net.flowChannels} flow channels, Nd = ${net.headDrops} head drops, shape factor Nf/Nd = ${fixed(net.shapeFactor, 3)}, `,
-      `H = ${fixed(net.headDifference, 2)} m, so q ≈ k·H·Nf/Nd for an isotropic soil of conductivity k.`));
+    // The caption is the service's (the memo prints the same words); an older stored field has none.
+    const caption = net.caption ?? `Flow net: Nf = ${net.flowChannels} flow channels, Nd = ${net.headDrops} head drops, ` +
+      `shape factor Nf/Nd = ${fixed(net.shapeFactor, 3)}, H = ${fixed(net.headDifference, 2)} m.`;
+    this.flowNetEl.append(html('p', { id: 'flow-net-counts', 'data-nf': net.flowChannelsExact ?? net.flowChannels, 'data-nd': net.headDrops },
+      caption));
   }
 
   idleText() {
@@ -107,6 +114,7 @@ export class Scene {
         `|i| = ${sig(Math.hypot(hit.gradX, hit.gradY), 3)}`,
         `i up = ${sig(-hit.gradY, 3)}`);
       if (soil) parts.push(`soil ${soil}`);
+      if (this.field.unconfined && hit.head < w.y) parts.push('unsaturated: negative pore pressure above the phreatic surface');
     } else if (this.probe) {
       parts.push('outside the mesh');
     }

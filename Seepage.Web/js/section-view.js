@@ -49,7 +49,7 @@ export function drawZoneOutlines(layer, section) {
 export function drawFeatures(features, labels, section, bounds) {
   const span = bounds.maxX - bounds.minX;
   const slab = Math.max(0.5, span * 0.025);
-  for (const h of arr(section.heads)) drawHead(features, labels, h, span);
+  arr(section.heads).forEach((h, i) => drawHead(features, labels, h, span, `/heads/${i}`, (bounds.minX + bounds.maxX) / 2));
   for (const d of arr(section.drains)) {
     const along = arr(d.along).filter(isPoint);
     if (along.length < 2) continue;
@@ -59,25 +59,27 @@ export function drawFeatures(features, labels, section, bounds) {
   }
   const exitAlong = arr(section.exitCheck?.along).filter(isPoint);
   if (exitAlong.length >= 2) features.append(svg('path', { class: 'exit-surface', d: pathData(exitAlong) }));
-  for (const s of arr(section.structures)) {
+  for (const [i, s] of arr(section.structures).entries()) {
     const base = arr(s.base).filter(isPoint);
     if (base.length < 2) continue;
     const top = base.map(p => [p[0], p[1] + slab]).reverse();
-    features.append(svg('path', { class: 'structure', d: pathData([...base, ...top], true) }));
+    features.append(svg('path', { class: 'structure', d: pathData([...base, ...top], true), 'data-pointer': `/structures/${i}` }));
     features.append(svg('path', { class: 'structure-base', d: pathData(base) }));
     const m = midpoint(base);
     labels.append(text(m[0], m[1] + slab, s.name ?? 'structure', { dy: '-0.5em' }));
   }
-  for (const c of arr(section.cutoffs)) {
+  for (const [i, c] of arr(section.cutoffs).entries()) {
     if (!isPoint(c.top) || !isPoint(c.tip)) continue;
+    const pointer = `/cutoffs/${i}`;
     const line = [c.top, c.tip];
     const length = Math.hypot(c.tip[0] - c.top[0], c.tip[1] - c.top[1]);
     if (c.thickness > 0 && length > 0) {
       // A permeable wall: the strip of its thickness centred on the line from top to tip, at any inclination.
       const nx = -(c.tip[1] - c.top[1]) / length * c.thickness / 2, ny = (c.tip[0] - c.top[0]) / length * c.thickness / 2;
-      features.append(svg('path', { class: 'wall-thick', d: pathData([[c.top[0] - nx, c.top[1] - ny], [c.tip[0] - nx, c.tip[1] - ny], [c.tip[0] + nx, c.tip[1] + ny], [c.top[0] + nx, c.top[1] + ny]], true) }));
+      features.append(svg('path', { class: 'wall-thick', 'data-pointer': pointer, d: pathData([[c.top[0] - nx, c.top[1] - ny], [c.tip[0] - nx, c.tip[1] - ny], [c.tip[0] + nx, c.tip[1] + ny], [c.top[0] + nx, c.top[1] + ny]], true) }));
     } else {
-      features.append(svg('path', { class: 'wall-casing', d: pathData(line) }), svg('path', { class: 'wall', d: pathData(line) }));
+      features.append(svg('path', { class: 'wall-casing', d: pathData(line), 'data-pointer': pointer }),
+        svg('path', { class: 'wall', d: pathData(line), 'data-pointer': pointer }, svg('title', {}, `${c.name ?? 'cutoff'}: click to edit`)));
     }
     const depth = Math.hypot(c.top[0] - c.tip[0], c.top[1] - c.tip[1]);
     // Labels of cutoffs left of the middle read leftwards, the others rightwards, so neighbours do not collide.
@@ -87,18 +89,23 @@ export function drawFeatures(features, labels, section, bounds) {
   }
 }
 
-function drawHead(features, labels, h, span) {
+function drawHead(features, labels, h, span, pointer, mid) {
   const along = arr(h.along).filter(isPoint);
   if (along.length < 2) return;
-  features.append(svg('path', { class: 'head-boundary', d: pathData(along) }));
+  features.append(svg('path', { class: 'head-boundary', d: pathData(along), 'data-pointer': pointer },
+    svg('title', {}, `${h.name ?? 'head'}: click to edit`)));
   if (!Number.isFinite(h.total)) return;
   const xs = along.map(p => p[0]);
   const x0 = Math.min(...xs), x1 = Math.max(...xs);
   const level = h.total;
   const topOfBoundary = Math.max(...along.map(p => p[1]));
   if (x1 - x0 > span * 0.01) {
-    features.append(svg('path', { class: 'water-level', d: pathData([[x0, level], [x1, level]]) }));
-    labels.append(text((x0 + x1) / 2, level, `▽ ${h.name ?? 'head'}: h = ${fixed(level, 2)} m`, { dy: '-0.45em', class: 'water' }));
+    features.append(svg('path', { class: 'water-level', d: pathData([[x0, level], [x1, level]]), 'data-pointer': pointer }));
+    // The label sits at the end nearer the middle of the section (by the structure, where "Fit" looks) and reads
+    // outwards, so the two water levels of a structure do not meet.
+    const inner = Math.abs(x0 - mid) < Math.abs(x1 - mid) ? x0 : x1;
+    const outwards = inner === x0 ? { 'text-anchor': 'start', dx: '0.6em' } : { 'text-anchor': 'end', dx: '-0.6em' };
+    labels.append(text(inner, level, `▽ ${h.name ?? 'head'}: h = ${fixed(level, 2)} m`, { dy: '-0.45em', class: 'water', ...outwards }));
   } else {
     const m = midpoint(along);
     labels.append(text(m[0], Math.max(m[1], topOfBoundary), `${h.name ?? 'head'}: h = ${fixed(level, 2)} m`, { dy: '-0.45em', class: 'water' }));

@@ -42,6 +42,7 @@ public class AnalysisEndpointTests
         Assert.Equal(triangles, field.GetProperty("velocities").GetArrayLength());
     }
 
+    [Trait("Category", "Slow")] // two server starts
     [Fact]
     public async Task Get_AfterRestartOnSameDatabase_StillThere()
     {
@@ -104,6 +105,7 @@ public class AnalysisEndpointTests
 
     // A cutoff with a thickness and kx is a permeable wall: accepted, meshed as a zone of its own, and it lets
     // water through, so the flow exceeds that of the same section with an impervious cutoff.
+    [Trait("Category", "Slow")] // two analyses of a fine wall mesh
     [Fact]
     public async Task Post_PermeableWall_201AndMoreFlowThanImpervious()
     {

@@ -26,7 +26,12 @@ public static class GeneratedClient
         };
         settings.CSharpGeneratorSettings.Namespace = "Generated";
         settings.CSharpGeneratorSettings.JsonLibrary = NJsonSchema.CodeGeneration.CSharp.CSharpJsonLibrary.SystemTextJson;
-        return new CSharpClientGenerator(document, settings).GenerateFile();
+        string source = new CSharpClientGenerator(document, settings).GenerateFile();
+        // NSwag names enum values that are not identifiers ("m/s", "kN/m3") with [EnumMember], which
+        // System.Text.Json does not read; since .NET 9 it reads [JsonStringEnumMemberName], so each is given both.
+        return System.Text.RegularExpressions.Regex.Replace(source,
+            @"\[System\.Runtime\.Serialization\.EnumMember\(Value = (@""[^""]*"")\)\]",
+            "$0 [System.Text.Json.Serialization.JsonStringEnumMemberName($1)]");
     }
 
     /// <summary>Compiles the source against the running framework's assemblies; throws with every compiler error.</summary>

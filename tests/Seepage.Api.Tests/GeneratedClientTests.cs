@@ -42,14 +42,36 @@ public class GeneratedClientTests
         object stored = await Call(client, "GetAnalysisAsync", id);
         Assert.Equal(flow, (double)Get(Get(stored, "Flow")!, "PerMetre")!);
 
+        // Stored work: listed, renamed through a typed body, deleted (then 404).
+        object listed = await Call(client, "ListAnalysesAsync", null, null, null);
+        Assert.Contains(((IEnumerable)Get(listed, "Items")!).Cast<object>(), i => (string?)Get(i, "Id") == id);
+        var renameType = assembly.GetType("Generated.RenameDto")!;
+        object rename = Activator.CreateInstance(renameType)!;
+        renameType.GetProperty("Title")!.SetValue(rename, "Renamed by the generated client");
+        object renamed = await Call(client, "RenameAnalysisAsync", id, rename);
+        Assert.Equal("Renamed by the generated client", (string?)Get(renamed, "Title"));
+
         // A query enum becomes a C# enum; the PDF arrives as a binary file response.
         var report = clientType.GetMethods()
-            .Single(m => m.Name == "GetAnalysisReportAsync" && m.GetParameters().Length == 2);
+            .Single(m => m.Name == "GetAnalysisReportAsync" && m.GetParameters().Length == 3);
         var declared = report.GetParameters()[1].ParameterType;
         var formatType = Nullable.GetUnderlyingType(declared) ?? declared;
-        object file = await Call(client, "GetAnalysisReportAsync", id, Enum.Parse(formatType, "Html", ignoreCase: true));
+        object file = await Call(client, "GetAnalysisReportAsync", id, Enum.Parse(formatType, "Html", ignoreCase: true),
+            null);
         using (var reader = new StreamReader((Stream)Get(file, "Stream")!))
             Assert.Contains("<html", await reader.ReadToEndAsync(), StringComparison.OrdinalIgnoreCase);
+
+        await Call(client, "DeleteAnalysisAsync", id);
+        var deleted = await Assert.ThrowsAnyAsync<Exception>(() => Call(client, "GetAnalysisAsync", id));
+        Assert.Equal(404, (int)Get(deleted, "StatusCode")!);
+
+        // Every operation of the document, including the design runs and imports, is a method of the client.
+        using var document = System.Text.Json.JsonDocument.Parse(await http.GetStringAsync("/swagger/v1/swagger.json"));
+        var methods = clientType.GetMethods().Select(m => m.Name).ToHashSet();
+        var absent = document.RootElement.GetProperty("paths").EnumerateObject()
+            .SelectMany(p => p.Value.EnumerateObject()).Select(o => o.Value.GetProperty("operationId").GetString() + "Async")
+            .Where(name => !methods.Contains(name)).ToList();
+        Assert.True(absent.Count == 0, "not in the client: " + string.Join(", ", absent));
 
         // Problems arrive as the client's typed exception with the status and the problem details.
         var missing = await Assert.ThrowsAnyAsync<Exception>(() => Call(client, "GetStudyAsync", "nope", null));

@@ -33,6 +33,7 @@ public class OpenApiDocumentTests
             if (!responses.Any(r => r.Name.StartsWith('2'))) faults.Add($"{at}: no success response");
             foreach (var response in responses)
             {
+                if (response.Name == "204") continue; // no content by definition (RFC 9110, 15.3.5)
                 if (!response.Value.TryGetProperty("content", out var content) || !content.EnumerateObject().Any())
                 {
                     faults.Add($"{at} {response.Name}: no content type");

@@ -91,29 +91,4 @@ public class StudyEndpointTests
         Assert.Equal(HttpStatusCode.NotFound, get.StatusCode);
         Assert.Equal("application/problem+json", get.Content.Headers.ContentType?.MediaType);
     }
-
-    [Fact]
-    public async Task Get_RunningStudyNobodyWroteTo_ReportsInterrupted()
-    {
-        using var factory = new SeepageFactory();
-        var client = factory.CreateClient();
-        await client.GetAsync("/api/v1/studies/nope");             // opens the database
-        var study = new JsonObject
-        {
-            ["id"] = "sold", ["title"] = "t", ["createdAt"] = "2026-01-01T00:00:00+00:00", ["status"] = "running", ["done"] = 1,
-            ["total"] = 3, ["parameters"] = new JsonArray(), ["rows"] = new JsonArray(), ["caution"] = "c", ["seconds"] = 1.0,
-        };
-        using (var connection = new Microsoft.Data.Sqlite.SqliteConnection($"Data Source={factory.DatabasePath};Pooling=False"))
-        {
-            connection.Open();
-            using var command = connection.CreateCommand();
-            command.CommandText = "INSERT INTO studies VALUES ('sold', $t, 't', 'running', '{}', $json, $t)";
-            command.Parameters.AddWithValue("$t", DateTimeOffset.UtcNow.AddHours(-1).ToString("O"));
-            command.Parameters.AddWithValue("$json", study.ToJsonString());
-            command.ExecuteNonQuery();
-        }
-        var got = await ReadJson(await client.GetAsync("/api/v1/studies/sold"));
-        Assert.Equal("interrupted", got.GetProperty("status").GetString());
-        Assert.Equal(1, got.GetProperty("done").GetInt32());
-    }
 }

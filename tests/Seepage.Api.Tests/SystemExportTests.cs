@@ -9,6 +9,7 @@ public class SystemExportTests
     // Matrix Market exchange format (Boisvert, Pozo & Remington, "The Matrix Market exchange formats", NIST 1996):
     // the exported K_FF reads back as a square symmetric matrix whose size matches the right-hand side, with a
     // positive diagonal (common practice for a conductivity matrix after eliminating fixed heads).
+    [Trait("Category", "Slow")] // assembles the design example
     [Fact]
     public async Task Export_DesignExample_MatrixAndRhsReadBack()
     {

@@ -32,7 +32,7 @@ public sealed class DemoRunTests(BrowserFixture fixture)
 
         var net = field.RootElement.GetProperty("flowNet");
         var counts = await page.Locator("#flow-net-counts").InnerTextAsync();
-        Assert.Contains($"Nf = {net.GetProperty("flowChannels").GetInt32()} ", counts);
+        Assert.Contains($"Nf = {net.GetProperty("flowChannelsExact").GetDouble().ToString("0.00", CultureInfo.InvariantCulture)} ", counts);
         Assert.Contains($"Nd = {net.GetProperty("headDrops").GetInt32()} ", counts);
 
         var caution = page.Locator("#caution");

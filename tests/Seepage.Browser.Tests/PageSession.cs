@@ -58,11 +58,24 @@ public sealed class PageSession : IAsyncDisposable
         var before = await Page.GetAttributeAsync("#figures", "data-analysis-id");
         var section = JsonNode.Parse(await Page.InputValueAsync("#editor"))!;
         edit(section);
-        await Page.FillAsync("#editor", section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+        await FillEditorAsync(section.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
         await Page.ClickAsync("#run");
         await Page.WaitForFunctionAsync($"() => document.querySelector('#figures')?.dataset.analysisId !== '{before}' && document.body.dataset.runState === 'done'",
             null, new() { Timeout = 60_000 });
         return (await Page.GetAttributeAsync("#figures", "data-analysis-id"))!;
+    }
+
+    /// <summary>Shows the JSON tab and replaces the editor's text (as typing would).</summary>
+    public async Task FillEditorAsync(string text)
+    {
+        await Page.ClickAsync("#tab-json");
+        await Page.FillAsync("#editor", text);
+    }
+
+    /// <summary>Saves a viewport screenshot (what the user sees without scrolling) as TestResults/screenshots/{name}.png.</summary>
+    public async Task ScreenshotViewportAsync(string name)
+    {
+        await Page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(BrowserFixture.ScreenshotFolder, $"{name}.png") });
     }
 
     /// <summary>Saves a full-page screenshot as TestResults/screenshots/{name}.png.</summary>

@@ -17,7 +17,7 @@ public sealed class SectionCheckTests(BrowserFixture fixture)
         var section = JsonNode.Parse(await page.InputValueAsync("#editor"))!;
         section["soils"]![0]!["kx"] = -1.0;
         var text = section.ToJsonString(new System.Text.Json.JsonSerializerOptions { WriteIndented = true });
-        await page.FillAsync("#editor", text);
+        await session.FillEditorAsync(text);
 
         var problem = page.Locator("#check-list li.problem[data-pointer^='/soils/0']");
         await problem.First.WaitForAsync(new() { Timeout = 15_000 });
@@ -47,7 +47,7 @@ public sealed class SectionCheckTests(BrowserFixture fixture)
         await using var session = await PageSession.OpenAsync(fixture);
         await session.LoadDemoAsync();
         var page = session.Page;
-        await page.FillAsync("#editor", "{\n  \"title\": \"broken\",\n  \"soils\": [ }\n");
+        await session.FillEditorAsync("{\n  \"title\": \"broken\",\n  \"soils\": [ }\n");
         var item = page.Locator("#check-list li.problem");
         await item.First.WaitForAsync(new() { Timeout = 5_000 });
         Assert.Contains("JSON syntax", await item.First.InnerTextAsync());

@@ -58,6 +58,7 @@ public class PermeableWallTests(Xunit.Abstractions.ITestOutputHelper output)
     // A wall from the end of a floor through a sand layer into the silt below: the strip is cut out of both layers
     // and meshed as one zone. Flow is conserved, and a wall more pervious than an impervious cutoff and less than
     // the sand lets through more than the cutoff and less than no wall at all (monotonicity; common practice).
+    [Trait("Category", "Slow")] // fine wall mesh
     [Fact]
     public void Analysis_WallAcrossLayers_FlowBetweenCutoffAndNone()
     {

@@ -20,8 +20,13 @@ public class ExampleSectionTests
         // Closed form for this one (Harr 1962, s/T = 1/2): q = kH/2 = 1.0e-4 m³/s per m; the pinned FE value is 0.5 % above.
         { "examples/cofferdam-sheet-pile.section.json", 0.00010048643060622947, 0, 0.24199219205603736, "3.540924133699999" },
         { "examples/spillway-slab-drain.section.json", 0.00015514640393632655, 651.0714182541179, 0.09171335203807196, "5.054647319181518" },
+        // Unconfined examples (phreatic surface found by the Picard iteration; the iteration is deterministic).
+        // The embankment's water all goes into the toe drain, so no exit station is wetted (exit check not made: 0 here).
+        { "examples/embankment-toe-drain.section.json", 3.087291064817179E-06, 0, 0, "" },
+        { "examples/levee-pervious-foundation.section.json", 0.0002472804052769807, 0, 0.24276621695004777, "" },
     };
 
+    [Trait("Category", "Slow")] // every shipped example, unconfined ones included
     [Theory]
     [MemberData(nameof(Pinned))]
     public void Analysis_ExampleSection_KeyFiguresAsPinned(string file, double flow, double uplift, double exit, string heave)

@@ -33,6 +33,8 @@ public class SectionSpreadsheetTests
     [InlineData("twin-pile-weir")]
     [InlineData("cofferdam-sheet-pile")]
     [InlineData("spillway-slab-drain")]
+    [InlineData("embankment-toe-drain")]
+    [InlineData("levee-pervious-foundation")]
     public void ReadCsv_TemplateOfExample_GivesTheSameDocument(string name)
     {
         var example = Example(name);
@@ -46,6 +48,8 @@ public class SectionSpreadsheetTests
     [InlineData("twin-pile-weir")]
     [InlineData("cofferdam-sheet-pile")]
     [InlineData("spillway-slab-drain")]
+    [InlineData("embankment-toe-drain")]
+    [InlineData("levee-pervious-foundation")]
     public void ReadXlsx_TemplateOfExample_GivesTheSameDocument(string name)
     {
         var example = Example(name);

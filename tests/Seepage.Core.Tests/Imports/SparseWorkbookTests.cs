@@ -1,6 +1,5 @@
-using System.IO.Compression;
-using System.Text;
 using Seepage.Core.Imports;
+using Seepage.Core.Tests.Support;
 
 namespace Seepage.Core.Tests.Imports;
 
@@ -9,29 +8,9 @@ namespace Seepage.Core.Tests.Imports;
 /// one the user sees.</summary>
 public class SparseWorkbookTests
 {
-    private static byte[] Workbook(string sheetName, string sheetData)
-    {
-        using var stream = new MemoryStream();
-        using (var zip = new ZipArchive(stream, ZipArchiveMode.Create, leaveOpen: true))
-        {
-            void Add(string path, string xml)
-            {
-                using var writer = new StreamWriter(zip.CreateEntry(path).Open(), new UTF8Encoding(false));
-                writer.Write(xml);
-            }
-            const string pkg = "http://schemas.openxmlformats.org/package/2006/";
-            const string main = "http://schemas.openxmlformats.org/spreadsheetml/2006/main";
-            const string rel = "http://schemas.openxmlformats.org/officeDocument/2006/relationships";
-            Add("[Content_Types].xml", $"""<Types xmlns="{pkg}content-types"><Default Extension="rels" ContentType="application/vnd.openxmlformats-package.relationships+xml"/><Default Extension="xml" ContentType="application/xml"/><Override PartName="/xl/workbook.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml"/><Override PartName="/xl/worksheets/sheet1.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.worksheet+xml"/></Types>""");
-            Add("_rels/.rels", $"""<Relationships xmlns="{pkg}relationships"><Relationship Id="rId1" Type="{rel}/officeDocument" Target="xl/workbook.xml"/></Relationships>""");
-            Add("xl/workbook.xml", $"""<workbook xmlns="{main}" xmlns:r="{rel}"><sheets><sheet name="{sheetName}" sheetId="1" r:id="rId1"/></sheets></workbook>""");
-            Add("xl/_rels/workbook.xml.rels", $"""<Relationships xmlns="{pkg}relationships"><Relationship Id="rId1" Type="{rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>""");
-            Add("xl/worksheets/sheet1.xml", $"""<worksheet xmlns="{main}"><sheetData>{sheetData}</sheetData></worksheet>""");
-        }
-        return stream.ToArray();
-    }
+    private static byte[] Workbook(string sheetName, string sheetData) => MinimalWorkbook.Build(MinimalWorkbook.Of(sheetName, sheetData));
 
-    private static string Text(string cell, string text) => $"""<c r="{cell}" t="inlineStr"><is><t>{text}</t></is></c>""";
+    private static string Text(string cell, string text) => MinimalWorkbook.Text(cell, text);
 
     [Fact]
     public void ReadXlsx_SparseRowsAndCells_ProblemNamesTheCellAsShown()

@@ -31,6 +31,7 @@ public class MesherPropertyTests
                 return s;
             });
 
+    [Trait("Category", "Slow")] // property test over random sections
     [Fact]
     public void Build_RandomLayeredSections_SatisfiesMeshInvariants()
     {

@@ -8,6 +8,7 @@ public class CofferdamHeaveTests
     // Double-wall cofferdam (Terzaghi, "Theoretical Soil Mechanics", 1943; the prism rule as in HeaveCalculator):
     // two walls 10 m apart driven 6 m into a 20 m sand layer, the water inside pumped down to 2 m below the ground.
     // For each wall the prism lies on the excavation side (lower heads), D = 6 m from the ground to the tip, width 3 m.
+    [Trait("Category", "Slow")] // fine cofferdam mesh
     [Fact]
     public void Compute_DoubleWallCofferdam_PrismsOnExcavationSide()
     {
@@ -36,6 +37,7 @@ public class CofferdamHeaveTests
     // D = 6 m from the excavation floor to the tip and width D/2; the soil is given by its saturated unit weight
     // 20 kN/m³, so γ′ = 20 − 9.81 kN/m³ and W′ = γ′·D·D/2 (Terzaghi 1943; γ′ = γsat − γw, common practice).
     // The excavation floor is also the exit: its upward gradient is the critical one for piping.
+    [Trait("Category", "Slow")] // fine cofferdam mesh
     [Fact]
     public void Compute_LoweredExcavation_PrismFromExcavationFloorWithSaturatedUnitWeight()
     {

@@ -102,6 +102,7 @@ public class AlgebraicMultigridTests
     }
 
     // Two solves of a matrix large enough for the two-thread kernels give identical bits.
+    [Trait("Category", "Slow")] // two solves of a fine grid
     [Fact]
     public void Solve_Twice_IsBitwiseDeterministic()
     {
@@ -118,6 +119,7 @@ public class AlgebraicMultigridTests
     // reactions, must agree with the flow of a solve converged to rounding (1e-14) within 1e-6 relative,
     // and inflow must balance outflow to the same figure, on a mostly no-flow section with contrast 1e6 and
     // anisotropy 100. Measured when written: flow error ≈ 0.3·tol and imbalance ≈ 1–2·tol at each tolerance.
+    [Trait("Category", "Slow")] // fine grid solved twice
     [Fact]
     public void Solve_DefaultTolerance_FlowWithinOneMillionthOfConverged()
     {

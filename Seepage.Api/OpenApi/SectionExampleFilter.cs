@@ -3,7 +3,7 @@ using Microsoft.OpenApi;
 using Seepage.Api.Endpoints;
 using Swashbuckle.AspNetCore.SwaggerGen;
 
-namespace Seepage.Api;
+namespace Seepage.Api.OpenApi;
 
 /// <summary>Puts the default example section into the OpenAPI document as the example body of every operation
 /// that takes a section document.</summary>
